@@ -15,11 +15,11 @@ import {
   uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core';
+import { TEAM_ROLES } from '../../lib/auth/roles';
 
 const createdAt = () => timestamp('created_at', { withTimezone: true, mode: 'date' }).notNull().defaultNow();
 
-/** The five roles a member can hold in a team, from most to least capable. */
-export const TEAM_ROLES = ['owner', 'designer', 'reviewer', 'fab', 'viewer'] as const;
+export { TEAM_ROLES };
 
 export const users = pgTable(
   'users',
