@@ -1,0 +1,3 @@
+export { gdsiiChunks, writeGdsii, type GdsiiOptions } from './write-gdsii';
+export { readGdsii } from './read-gdsii';
+export { encodeReal8, decodeReal8 } from './real8';
