@@ -4,15 +4,9 @@
  * deleting a comment keeps its row (deletedAt) so replies keep their place in the thread.
  */
 import { sql } from 'drizzle-orm';
-import { type AnyPgColumn, check, customType, doublePrecision, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { type AnyPgColumn, check, doublePrecision, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { users } from './core';
-import { revisions } from './designs';
-
-const bytes = customType<{ data: Uint8Array; driverData: Buffer }>({
-  dataType: () => 'bytea',
-  toDriver: (value) => Buffer.from(value.buffer, value.byteOffset, value.byteLength),
-  fromDriver: (value) => new Uint8Array(value.buffer, value.byteOffset, value.byteLength),
-});
+import { bytea, revisions } from './designs';
 
 const stamp = (name: string) => timestamp(name, { withTimezone: true, mode: 'date' });
 
@@ -62,8 +56,8 @@ export const commentAttachments = pgTable(
     width: integer('width').notNull(),
     height: integer('height').notNull(),
     sha256: text('sha256').notNull(),
-    content: bytes('content').notNull(),
-    thumbnail: bytes('thumbnail').notNull(),
+    content: bytea('content').notNull(),
+    thumbnail: bytea('thumbnail').notNull(),
     thumbnailWidth: integer('thumbnail_width').notNull(),
     thumbnailHeight: integer('thumbnail_height').notNull(),
     createdAt: stamp('created_at').notNull().defaultNow(),
