@@ -1,0 +1,123 @@
+/**
+ * Payload schemas for designs, revisions and phase maps, shared by the forms and the route handlers.
+ * Lengths in µm; phase in radians.
+ */
+import { z } from 'zod';
+
+/** Longest script a design accepts; larger texts are refused before they reach the compiler. */
+export const MAX_SCRIPT_CHARS = 100_000;
+export const MAX_MESSAGE_CHARS = 500;
+/** Phase-map files above this size are refused before they are parsed. */
+export const MAX_PHASE_MAP_BYTES = 8 * 1024 * 1024;
+
+const micrometres = (what: string, min: number, max: number) =>
+  z
+    .number({ error: `${what} must be a number (µm).` })
+    .refine(Number.isFinite, `${what} must be a finite number (µm).`)
+    .min(min, `${what} must be at least ${min} µm.`)
+    .max(max, `${what} must be at most ${max} µm.`);
+
+const layerNumber = z.number().int('Layer and datatype numbers are whole numbers.').min(0, 'Layer and datatype numbers start at 0.').max(65535, 'GDSII allows layer and datatype numbers up to 65535.');
+
+export const LAYER_PURPOSES = ['zones', 'level', 'label', 'aperture', 'marker'] as const;
+
+export const layerAssignmentSchema = z.object({
+  purpose: z.enum(LAYER_PURPOSES),
+  /** for purpose 'level': the mask index k, 1-based */
+  levelIndex: z.number().int().min(1).max(8).optional(),
+  layer: layerNumber,
+  datatype: layerNumber,
+  name: z.string().trim().min(1, 'Every layer needs a name.').max(60, 'Layer names are at most 60 characters.'),
+});
+export type LayerAssignment = z.infer<typeof layerAssignmentSchema>;
+
+export const processProfileSchema = z
+  .object({
+    /** smallest line or space the process resolves */
+    minimumFeature: micrometres('Minimum feature', 0.001, 1000),
+    /** size of one database unit */
+    databaseUnit: micrometres('Database unit', 0.0001, 1),
+    /** largest distance of a polygon edge from the true curve */
+    chordTolerance: micrometres('Chord tolerance', 0.0001, 10),
+    tone: z.enum(['positive', 'negative']),
+    layerMap: z.array(layerAssignmentSchema).min(1, 'The layer map needs at least the zones layer.').max(32),
+    processNotes: z.string().max(4000, 'Process notes are at most 4000 characters.'),
+  })
+  .refine((p) => p.chordTolerance >= p.databaseUnit, {
+    message: 'The chord tolerance must be at least one database unit.',
+    path: ['chordTolerance'],
+  })
+  .refine((p) => new Set(p.layerMap.map((l) => `${l.layer}/${l.datatype}`)).size === p.layerMap.length, {
+    message: 'Two layer-map rows use the same layer and datatype.',
+    path: ['layerMap'],
+  });
+export type ProcessProfile = z.infer<typeof processProfileSchema>;
+
+/** A starting profile for a new design: 1 nm grid, 10 nm chords (common practice, no source). */
+export const DEFAULT_PROCESS_PROFILE: ProcessProfile = {
+  minimumFeature: 0.5,
+  databaseUnit: 0.001,
+  chordTolerance: 0.01,
+  tone: 'positive',
+  layerMap: [
+    { purpose: 'zones', layer: 1, datatype: 0, name: 'zones' },
+    { purpose: 'label', layer: 2, datatype: 0, name: 'label' },
+  ],
+  processNotes: '',
+};
+
+export const scriptSchema = z
+  .string()
+  .max(MAX_SCRIPT_CHARS, `The script is longer than ${MAX_SCRIPT_CHARS.toLocaleString('en')} characters; split it or move data into a phase map.`);
+
+export const createDesignSchema = z.object({
+  teamId: z.uuid('Choose a team.'),
+  name: z.string().trim().min(1, 'Give the design a name.').max(120, 'Names are at most 120 characters.'),
+  description: z.string().trim().max(2000, 'Descriptions are at most 2000 characters.').default(''),
+  /** name of a file in examples/ to start from, without ".zw" */
+  example: z
+    .string()
+    .regex(/^[a-z0-9-]{1,60}$/, 'Unknown example.')
+    .optional(),
+  processProfile: processProfileSchema.default(DEFAULT_PROCESS_PROFILE),
+});
+export type CreateDesignInput = z.infer<typeof createDesignSchema>;
+
+/** Every change to a design says which version it was made from; a newer version in the database wins. */
+const baseVersion = z.number().int().min(1);
+
+export const saveDraftSchema = z.object({ script: scriptSchema, baseVersion });
+
+export const updateDesignSchema = z.object({
+  baseVersion,
+  name: createDesignSchema.shape.name,
+  description: z.string().trim().max(2000, 'Descriptions are at most 2000 characters.'),
+  processProfile: processProfileSchema,
+});
+
+export const saveRevisionSchema = z.object({
+  script: scriptSchema.refine((s) => s.trim().length > 0, 'The script is empty.'),
+  message: z.string().trim().min(1, 'Say in a few words what this revision changes.').max(MAX_MESSAGE_CHARS, `Messages are at most ${MAX_MESSAGE_CHARS} characters.`),
+  baseVersion,
+});
+export type SaveRevisionInput = z.infer<typeof saveRevisionSchema>;
+
+/** A name the script can use to refer to the map: a letter or underscore, then letters, digits, underscores. */
+export const phaseMapNameSchema = z
+  .string()
+  .regex(/^[A-Za-z_][A-Za-z0-9_]{0,63}$/, 'A phase-map name starts with a letter or _ and holds only letters, digits and _ (at most 64).');
+
+/** The form fields that come with an uploaded phase-map file (multipart, so numbers arrive as text). */
+export const phaseMapFieldsSchema = z.object({
+  name: phaseMapNameSchema,
+  format: z.enum(['png16', 'csv'], { error: 'The format is a 16-bit grayscale PNG or a CSV grid.' }),
+  pitch: z.coerce
+    .number({ error: 'The pitch must be a number (µm).' })
+    .positive('The pitch must be more than 0 µm.')
+    .max(10_000, 'The pitch must be at most 10000 µm.'),
+  phaseScale: z.coerce
+    .number({ error: 'The phase scale must be a number (rad).' })
+    .positive('The phase scale must be more than 0 rad.')
+    .max(1e6, 'The phase scale must be at most 1000000 rad.'),
+});
+export type PhaseMapFields = z.infer<typeof phaseMapFieldsSchema>;
