@@ -1,0 +1,1 @@
+export { oasisChunks, writeOasis, type OasisOptions } from './write-oasis';
