@@ -1,0 +1,124 @@
+import type { LayoutLibrary, LayoutPlacement } from '../layout/types';
+import { cellBoundingBox, isEmptyBox } from './bounding-box';
+import { INK, OPEN, layerKey, layerStyles } from './layer-style';
+import { scaleBar } from './scale-bar';
+
+export interface SvgOptions {
+  /** shown above the legend, e.g. the design name and revision */
+  title?: string;
+}
+
+/**
+ * An SVG preview of a library, streamed as text chunks. The viewBox is in µm (y up, as on the mask);
+ * every cell is a <symbol>-like group in <defs> drawn in DBU, placements are <use> elements,
+ * so arrays stay small. One group per layer with its colour, then a legend and a scale bar.
+ */
+export function* svgChunks(library: LayoutLibrary, options: SvgOptions = {}): Generator<string> {
+  const micrometresPerDbu = library.databaseUnit / 1e-6;
+  let box = cellBoundingBox(library, library.topCell);
+  if (isEmptyBox(box)) box = { x0: -1 / micrometresPerDbu, y0: -1 / micrometresPerDbu, x1: 1 / micrometresPerDbu, y1: 1 / micrometresPerDbu };
+  const width = (box.x1 - box.x0) * micrometresPerDbu;
+  const height = (box.y1 - box.y0) * micrometresPerDbu;
+  const margin = 0.05 * Math.max(width, height);
+  const font = 0.035 * Math.max(width, height);
+  const styles = layerStyles(library.layers);
+  const cellLayerId = cellLayerIds(library);
+  const legendRows = library.layers.length + 2;
+  const legendHeight = legendRows * font * 1.6 + margin;
+  const left = box.x0 * micrometresPerDbu - margin;
+  const top = -box.y1 * micrometresPerDbu - margin;
+  const viewWidth = width + 2 * margin;
+  const viewHeight = height + 2 * margin + legendHeight;
+
+  yield `<?xml version="1.0" encoding="UTF-8"?>\n`;
+  yield `<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" viewBox="${num(left)} ${num(top)} ${num(viewWidth)} ${num(viewHeight)}" width="${num(viewWidth)}um" height="${num(viewHeight)}um">\n`;
+  yield `<title>${escapeXml(options.title ?? library.name)}</title>\n`;
+  yield `<rect x="${num(left)}" y="${num(top)}" width="${num(viewWidth)}" height="${num(viewHeight)}" fill="#f7f7f2"/>\n`;
+  yield `<rect x="${num(box.x0 * micrometresPerDbu)}" y="${num(-box.y1 * micrometresPerDbu)}" width="${num(width)}" height="${num(height)}" fill="${OPEN}"/>\n`;
+
+  // Per cell and layer one group; the layer's colour sits on the outer layer group of each <use>.
+  yield '<defs>\n';
+  for (const cell of library.cells) {
+    for (const shapes of cell.shapes) {
+      yield `<g id="${cellLayerId(cell.name, shapes.layer, shapes.datatype)}">\n`;
+      for (const polygon of shapes.polygons) yield `<path d="${pathData(polygon)}"/>\n`;
+      for (const placement of cell.placements) yield useElement(placement, cellLayerId(placement.cell, shapes.layer, shapes.datatype));
+      yield '</g>\n';
+    }
+    // layers a cell only inherits through its placements still need a group to refer to
+    for (const layer of library.layers) {
+      if (cell.shapes.some((s) => s.layer === layer.layer && s.datatype === layer.datatype)) continue;
+      yield `<g id="${cellLayerId(cell.name, layer.layer, layer.datatype)}">\n`;
+      for (const placement of cell.placements) yield useElement(placement, cellLayerId(placement.cell, layer.layer, layer.datatype));
+      yield '</g>\n';
+    }
+  }
+  yield '</defs>\n';
+
+  yield `<g transform="scale(${num(micrometresPerDbu)},${num(-micrometresPerDbu)})">\n`;
+  for (const layer of library.layers) {
+    const style = styles.get(layerKey(layer.layer, layer.datatype));
+    if (!style) continue;
+    yield `<g id="layer-${layer.layer}-${layer.datatype}" data-name="${escapeXml(layer.name)}" fill="${style.fill}" fill-opacity="${style.opacity}">`;
+    yield `<use xlink:href="#${cellLayerId(library.topCell, layer.layer, layer.datatype)}" href="#${cellLayerId(library.topCell, layer.layer, layer.datatype)}"/></g>\n`;
+  }
+  yield '</g>\n';
+
+  // Legend and scale bar, below the drawing, in µm.
+  const legendTop = box.y1 * -micrometresPerDbu + height + margin + font;
+  const x = box.x0 * micrometresPerDbu;
+  yield `<g font-family="'JetBrains Mono', monospace" font-size="${num(font)}" fill="${INK}">\n`;
+  yield `<text x="${num(x)}" y="${num(legendTop)}">${escapeXml(options.title ?? library.name)}</text>\n`;
+  for (const [index, layer] of library.layers.entries()) {
+    const style = styles.get(layerKey(layer.layer, layer.datatype));
+    const y = legendTop + (index + 1) * font * 1.6;
+    yield `<rect x="${num(x)}" y="${num(y - font * 0.8)}" width="${num(font)}" height="${num(font)}" fill="${style?.fill}" fill-opacity="${style?.opacity}" stroke="${INK}" stroke-width="${num(font / 20)}"/>\n`;
+    yield `<text x="${num(x + font * 1.5)}" y="${num(y)}">${escapeXml(`${layer.layer}/${layer.datatype} ${layer.name} (${layer.purpose})`)}</text>\n`;
+  }
+  const bar = scaleBar(width);
+  const barY = legendTop + (library.layers.length + 1) * font * 1.6;
+  yield `<rect x="${num(x)}" y="${num(barY - font * 0.5)}" width="${num(bar.length)}" height="${num(font * 0.3)}" fill="${INK}"/>\n`;
+  yield `<text x="${num(x + bar.length + font * 0.5)}" y="${num(barY)}">${bar.label}</text>\n`;
+  yield '</g>\n</svg>\n';
+}
+
+export function writeSvg(library: LayoutLibrary, options: SvgOptions = {}): string {
+  return [...svgChunks(library, options)].join('');
+}
+
+function useElement(placement: LayoutPlacement, target: string): string {
+  const columns = placement.columns ?? 1;
+  const rows = placement.rows ?? 1;
+  const rotation = placement.rotation ?? 0;
+  // SVG applies the list right to left: reflect first, then rotate, then move
+  const transform = `${rotation ? ` rotate(${rotation})` : ''}${placement.mirrorX ? ' scale(1,-1)' : ''}`;
+  let out = '';
+  for (let i = 0; i < columns; i++) {
+    for (let j = 0; j < rows; j++) {
+      const dx = placement.x + i * (placement.columnStep?.x ?? 0) + j * (placement.rowStep?.x ?? 0);
+      const dy = placement.y + i * (placement.columnStep?.y ?? 0) + j * (placement.rowStep?.y ?? 0);
+      out += `<use href="#${target}" xlink:href="#${target}" transform="translate(${dx},${dy})${transform}"/>\n`;
+    }
+  }
+  return out;
+}
+
+function pathData(polygon: ArrayLike<number>): string {
+  let d = `M${polygon[0]} ${polygon[1]}`;
+  for (let i = 2; i < polygon.length; i += 2) d += `L${polygon[i]} ${polygon[i + 1]}`;
+  return `${d}Z`;
+}
+
+/** Element ids by cell position, since cell names may hold characters ids may not. */
+function cellLayerIds(library: LayoutLibrary): (cell: string, layer: number, datatype: number) => string {
+  const index = new Map(library.cells.map((c, i) => [c.name, i]));
+  return (cell, layer, datatype) => `c${index.get(cell)}-${layer}-${datatype}`;
+}
+
+function num(value: number): string {
+  return String(Number(value.toPrecision(8)));
+}
+
+function escapeXml(text: string): string {
+  return text.replace(/[<>&"]/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;' })[c] as string);
+}
