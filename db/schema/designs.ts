@@ -148,7 +148,7 @@ export const fabPhotos = pgTable(
     width: integer('width').notNull(),
     height: integer('height').notNull(),
     data: bytea('data').notNull(),
-    /** PNG, longest side THUMBNAIL_SIDE */
+    /** JPEG preview from lib/images (longest side THUMBNAIL_SIDE) */
     thumbnail: bytea('thumbnail').notNull(),
     uploadedBy: uuid('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: stamp('created_at').notNull().defaultNow(),

@@ -19,3 +19,6 @@ export const fabRunSchema = z.object({
   notes: z.string().max(5000, 'Notes are at most 5000 characters.').default(''),
 });
 export type FabRunInput = z.infer<typeof fabRunSchema>;
+
+/** Photos one run may carry; each is at most 10 MB (lib/images). */
+export const MAX_PHOTOS_PER_RUN = 8;
