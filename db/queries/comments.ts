@@ -13,7 +13,7 @@ import { mentionEmail } from '../../lib/mail/templates';
 import { resolveMentions } from '../../lib/workflow/mentions';
 import { wantsEmail, type MemberContact } from '../../lib/workflow/notifications';
 import type { AttachmentView, CommentAnchor, CommentView } from '../../lib/schemas/comments';
-import { REVISION_NOT_FOUND, displayName, loadRevisionAccess, refuse, teamContacts, type Outcome, type RevisionAccess } from './review';
+import { REVISION_NOT_FOUND, displayName, isId, loadRevisionAccess, refuse, teamContacts, type Outcome, type RevisionAccess } from './review';
 
 export const MAX_ATTACHMENTS_PER_COMMENT = 6;
 const COMMENT_NOT_FOUND = 'No such comment, or it belongs to a team you are not in.';
@@ -102,6 +102,7 @@ export async function listComments(revisionId: string, viewerId: string): Promis
 }
 
 async function loadComment(commentId: string, userId: string): Promise<{ row: CommentRow; access: RevisionAccess } | null> {
+  if (!isId(commentId)) return null;
   const [row] = await db.select().from(comments).where(eq(comments.id, commentId));
   if (!row) return null;
   const access = await loadRevisionAccess(db, row.revisionId, userId);
@@ -158,6 +159,7 @@ export async function createComment(input: CreateCommentInput): Promise<Outcome<
     return refuse(403, `Your role (${access.role}) may read comments but not write them.`);
   }
   if (input.parentId) {
+    if (!isId(input.parentId)) return refuse(400, 'The comment you are answering is not on this revision.');
     const [parent] = await db.select({ revisionId: comments.revisionId, deletedAt: comments.deletedAt }).from(comments).where(eq(comments.id, input.parentId));
     if (!parent || parent.revisionId !== input.revisionId) return refuse(400, 'The comment you are answering is not on this revision.');
     if (parent.deletedAt) return refuse(409, 'The comment you are answering was deleted; your reply was not saved. Copy your text and reload.');
@@ -295,12 +297,15 @@ export async function addAttachment(input: {
 export interface AttachmentFile {
   fileName: string;
   mime: string;
-  sha256: string;
+  /** of the original image; null for a thumbnail */
+  sha256: string | null;
   bytes: Buffer;
 }
 
 /** An attachment's image or its thumbnail, for members of the revision's team. */
 export async function readAttachment(attachmentId: string, viewerId: string, variant: 'original' | 'thumbnail'): Promise<Outcome<{ file: AttachmentFile }>> {
+  const notFound = refuse(404, 'No such attachment, or it belongs to a team you are not in.');
+  if (!isId(attachmentId)) return notFound;
   const [row] = await db
     .select({
       commentId: commentAttachments.commentId,
@@ -311,7 +316,6 @@ export async function readAttachment(attachmentId: string, viewerId: string, var
     })
     .from(commentAttachments)
     .where(eq(commentAttachments.id, attachmentId));
-  const notFound = refuse(404, 'No such attachment, or it belongs to a team you are not in.');
   if (!row) return notFound;
   const found = await loadComment(row.commentId, viewerId);
   if (!found || !can({ userId: viewerId, role: found.access.role }, 'comment.view')) return notFound;
@@ -319,6 +323,6 @@ export async function readAttachment(attachmentId: string, viewerId: string, var
     ok: true,
     file: variant === 'original'
       ? { fileName: row.fileName, mime: row.mime, sha256: row.sha256, bytes: row.bytes }
-      : { fileName: `thumbnail-${row.fileName.replace(/\.[^.]*$/, '')}.jpg`, mime: 'image/jpeg', sha256: row.sha256, bytes: row.bytes },
+      : { fileName: `thumbnail-${row.fileName.replace(/\.[^.]*$/, '')}.jpg`, mime: 'image/jpeg', sha256: null, bytes: row.bytes },
   };
 }

@@ -33,6 +33,13 @@ export function refuse(status: Refusal['status'], message: string): Refusal {
 
 export const REVISION_NOT_FOUND = 'No such revision, or it belongs to a team you are not in.';
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** Ids come from URLs; anything that is not a UUID names nothing (and must not reach PostgreSQL as one). */
+export function isId(value: string): boolean {
+  return UUID.test(value);
+}
+
 export interface RevisionAccess {
   revision: {
     id: string;
@@ -57,6 +64,7 @@ export async function loadRevisionAccess(
   userId: string,
   options: { lock?: boolean } = {},
 ): Promise<RevisionAccess | null> {
+  if (!isId(revisionId)) return null;
   const query = executor
     .select({
       id: revisions.id,
