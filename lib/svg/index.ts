@@ -1,2 +1,2 @@
 export { svgChunks, writeSvg, type SvgOptions } from './write-svg';
-export { cellBoundingBox, type Box } from './bounding-box';
+export { cellBoundingBox, type Box } from '../layout/bounding-box';

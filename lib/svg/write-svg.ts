@@ -1,5 +1,5 @@
 import type { LayoutLibrary, LayoutPlacement } from '../layout/types';
-import { cellBoundingBox, isEmptyBox } from './bounding-box';
+import { cellBoundingBox, isEmptyBox } from '../layout/bounding-box';
 import { INK, OPEN, layerKey, layerStyles } from './layer-style';
 import { scaleBar } from './scale-bar';
 

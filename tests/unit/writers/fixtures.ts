@@ -1,3 +1,4 @@
+import type { ExposureMatrixSpec } from '@/lib/layout/exposure-matrix';
 import type { LayoutLibrary } from '@/lib/layout/types';
 
 /** A hand-built library: a zone layer with a rectangle, a triangle and an L shape, a label, and a placed array. */
@@ -40,5 +41,38 @@ export function handBuiltLibrary(): LayoutLibrary {
       },
     ],
     topCell: 'TOP',
+  };
+}
+
+/** A square of the given side (µm) centred on the origin, as a one-cell library. */
+export function squareLibrary(side: number): LayoutLibrary {
+  const h = (side * 1000) / 2;
+  return {
+    name: 'SQUARE',
+    databaseUnit: 1e-9,
+    userUnit: 1e-6,
+    layers: [{ layer: 1, datatype: 0, name: 'zones', purpose: 'zones' }],
+    cells: [{ name: 'SQUARE', shapes: [{ layer: 1, datatype: 0, polygons: [Int32Array.from([-h, -h, h, -h, h, h, -h, h])] }], texts: [], placements: [] }],
+    topCell: 'SQUARE',
+  };
+}
+
+/** A label stand-in: one 1 µm box at the baseline start, so counts are easy to check. */
+export function boxLabel(_: string, x: number, y: number): Int32Array[] {
+  const x0 = Math.round(x * 1000);
+  const y0 = Math.round(y * 1000);
+  return [Int32Array.from([x0, y0, x0 + 1000, y0, x0 + 1000, y0 + 1000, x0, y0 + 1000])];
+}
+
+export function matrixSpec(columns: ExposureMatrixSpec['columns']): ExposureMatrixSpec {
+  return {
+    name: 'MATRIX',
+    columns,
+    rows: ['dose 90%', 'dose 100%'],
+    gap: 10,
+    labelHeight: 5,
+    labelLayer: { layer: 10, datatype: 0 },
+    labelFor: (c, r) => `${columns[c].caption} ${['dose 90%', 'dose 100%'][r]}`,
+    drawLabel: boxLabel,
   };
 }

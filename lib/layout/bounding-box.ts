@@ -1,4 +1,4 @@
-import type { LayoutCell, LayoutLibrary, LayoutPlacement } from '../layout/types';
+import type { LayoutCell, LayoutLibrary, LayoutPlacement } from './types';
 
 export interface Box {
   x0: number;
