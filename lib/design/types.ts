@@ -29,6 +29,8 @@ export interface PhaseField {
   field(x: number, y: number, out: Float64Array): void;
   /** Batch form of `field` along one row y; must not allocate. */
   fieldRow(y: number, xs: Float64Array, outRe: Float64Array, outIm: Float64Array): void;
+  /** Optional batch form of `phase` along one row y; must not allocate. The language always provides it. */
+  phaseRow?(y: number, xs: Float64Array, out: Float64Array): void;
   /**
    * An upper bound of the local spatial frequency |∇φ|/(2π), in cycles per µm, over the
    * axis-aligned box [x0, x1] × [y0, y1]. The geometry engine samples at least twice this rate,
