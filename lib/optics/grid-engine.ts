@@ -1,0 +1,226 @@
+import type { OpticsEngine } from './engine';
+import { fft2d } from './fft2d';
+import { incidentField } from './illumination';
+import { kernelMagnitude, waveWeight, type IdealWave } from './ideal-wave';
+import { mixedTransmission, type MaskModel } from './mask-model';
+import type { Grid } from './raster-coverage';
+import type { Illumination, Sampling } from './types';
+
+/**
+ * The 2-D method: the rasterised transmission (per-layer coverages and the aperture coverage) on an
+ * n×n grid, its angular spectrum by FFT, and the band-limited angular-spectrum transfer function
+ * exp(i·kz·z) with kz = 2π√(1/λ² − fx² − fy²) (evanescent waves dropped). The field at any point is
+ * the inverse transform evaluated there directly, so foci can be mapped finer than the grid.
+ * The band limit is that of Matsushima & Shimobaba, Opt. Express 17, 19662 (2009):
+ * |f| < 1/(λ·√((2·Δf·z)² + 1)) per axis, which keeps the sampled transfer function free of aliasing.
+ */
+export function createGridEngine(
+  mask: MaskModel,
+  grid: Grid,
+  layerCoverage: Float32Array[],
+  apertureCoverage: Float32Array,
+  illumination: Illumination,
+  sourceAxis: { x: number; y: number },
+  sampling: Sampling,
+): OpticsEngine {
+  const { n, pitch } = grid;
+  const cells = n * n;
+  const transmission = new Float64Array(2 * cells);
+  const spectrum = new Float64Array(2 * cells);
+  const frequency = new Float64Array(n);
+  for (let j = 0; j < n; j++) frequency[j] = (j < n / 2 ? j : j - n) / (n * pitch);
+  const df = 1 / (n * pitch);
+  const centreX = (i: number) => grid.x0 + (i + 0.5) * pitch;
+  const centreY = (j: number) => grid.y0 + (j + 0.5) * pitch;
+  let wavelength = mask.designWavelength;
+  const value = new Float64Array(2);
+  const inc = new Float64Array(2);
+  const drawn = new Float64Array(layerCoverage.length);
+
+  let incidentPower = 0;
+  let area = 0;
+  const setWavelength = (lambda: number) => {
+    wavelength = lambda;
+    const k = (2 * Math.PI) / lambda;
+    incidentPower = 0;
+    area = 0;
+    for (let j = 0; j < n; j++) {
+      const dy = centreY(j) - sourceAxis.y;
+      for (let i = 0; i < n; i++) {
+        const c = j * n + i;
+        const ap = apertureCoverage[c];
+        if (ap === 0) {
+          transmission[2 * c] = transmission[2 * c + 1] = spectrum[2 * c] = spectrum[2 * c + 1] = 0;
+          continue;
+        }
+        for (let l = 0; l < drawn.length; l++) drawn[l] = layerCoverage[l][c];
+        mixedTransmission(mask, drawn, lambda, value);
+        const dx = centreX(i) - sourceAxis.x;
+        incidentField(illumination, k, dx * dx + dy * dy, inc);
+        const tr = ap * value[0];
+        const ti = ap * value[1];
+        transmission[2 * c] = tr;
+        transmission[2 * c + 1] = ti;
+        spectrum[2 * c] = tr * inc[0] - ti * inc[1];
+        spectrum[2 * c + 1] = tr * inc[1] + ti * inc[0];
+        incidentPower += ap * (inc[0] * inc[0] + inc[1] * inc[1]) * pitch * pitch;
+        area += ap * pitch * pitch;
+      }
+    }
+    fft2d(spectrum, n, false);
+  };
+  setWavelength(wavelength);
+
+  /** Band limit per axis for propagation to z, and the squared cut-off of propagating waves. */
+  const limits = (z: number) => ({ axis: 1 / (wavelength * Math.sqrt((2 * df * z) ** 2 + 1)), radial2: 1 / (wavelength * wavelength) });
+  /** exp(i·2π·f·(x − x_first)) for every frequency f of one axis. */
+  const phasors = (offset: number) => {
+    const out = new Float64Array(2 * n);
+    for (let j = 0; j < n; j++) {
+      const a = 2 * Math.PI * frequency[j] * offset;
+      out[2 * j] = Math.cos(a);
+      out[2 * j + 1] = Math.sin(a);
+    }
+    return out;
+  };
+
+  return {
+    sampling,
+    get apertureArea() {
+      return area;
+    },
+    get incidentPower() {
+      return incidentPower;
+    },
+    setWavelength,
+    axialIntensities(x, y, z0, dz, count) {
+      const { axis, radial2 } = limits(z0 + dz * (count - 1));
+      const ex = phasors(x - centreX(0));
+      const ey = phasors(y - centreY(0));
+      // active spectrum entries: current term P = A·e^{i2π(fx x + fy y)}·e^{i kz z} and step S = e^{i kz dz}
+      const terms: number[] = [];
+      for (let j = 0; j < n; j++) {
+        if (Math.abs(frequency[j]) >= axis) continue;
+        for (let i = 0; i < n; i++) if (Math.abs(frequency[i]) < axis && frequency[i] ** 2 + frequency[j] ** 2 < radial2) terms.push(j * n + i);
+      }
+      const m = terms.length;
+      const P = new Float64Array(2 * m);
+      const S = new Float64Array(2 * m);
+      for (let q = 0; q < m; q++) {
+        const c = terms[q];
+        const j = Math.floor(c / n);
+        const i = c - j * n;
+        const kz = 2 * Math.PI * Math.sqrt(radial2 - frequency[i] ** 2 - frequency[j] ** 2);
+        const er = ex[2 * i] * ey[2 * j] - ex[2 * i + 1] * ey[2 * j + 1];
+        const ei = ex[2 * i] * ey[2 * j + 1] + ex[2 * i + 1] * ey[2 * j];
+        const ar = spectrum[2 * c] * er - spectrum[2 * c + 1] * ei;
+        const ai = spectrum[2 * c] * ei + spectrum[2 * c + 1] * er;
+        const c0 = Math.cos(kz * z0);
+        const s0 = Math.sin(kz * z0);
+        P[2 * q] = ar * c0 - ai * s0;
+        P[2 * q + 1] = ar * s0 + ai * c0;
+        S[2 * q] = Math.cos(kz * dz);
+        S[2 * q + 1] = Math.sin(kz * dz);
+      }
+      const out = new Float64Array(count);
+      const norm = 1 / cells;
+      for (let step = 0; step < count; step++) {
+        let re = 0;
+        let im = 0;
+        for (let q = 0; q < 2 * m; q += 2) {
+          const pr = P[q];
+          const pi = P[q + 1];
+          re += pr;
+          im += pi;
+          P[q] = pr * S[q] - pi * S[q + 1];
+          P[q + 1] = pr * S[q + 1] + pi * S[q];
+        }
+        out[step] = (re * re + im * im) * norm * norm;
+      }
+      return out;
+    },
+    focalMap(xc, yc, z, step, size) {
+      const { axis, radial2 } = limits(z);
+      const half = (size - 1) / 2;
+      const ex = Array.from({ length: size }, (_, a) => phasors(xc + (a - half) * step - centreX(0)));
+      const ey = Array.from({ length: size }, (_, b) => phasors(yc + (b - half) * step - centreY(0)));
+      // rows[jy][a] = Σ_jx A·H·exp(i2π fx x_a), then the map sums over jy
+      const rows = new Float64Array(2 * n * size);
+      for (let j = 0; j < n; j++) {
+        if (Math.abs(frequency[j]) >= axis) continue;
+        for (let i = 0; i < n; i++) {
+          const fx = frequency[i];
+          const rest = radial2 - fx * fx - frequency[j] ** 2;
+          if (Math.abs(fx) >= axis || rest <= 0) continue;
+          const c = j * n + i;
+          const kz = 2 * Math.PI * Math.sqrt(rest);
+          const hr = Math.cos(kz * z);
+          const hi = Math.sin(kz * z);
+          const gr = spectrum[2 * c] * hr - spectrum[2 * c + 1] * hi;
+          const gi = spectrum[2 * c] * hi + spectrum[2 * c + 1] * hr;
+          for (let a = 0; a < size; a++) {
+            const e = ex[a];
+            const o = 2 * (j * size + a);
+            rows[o] += gr * e[2 * i] - gi * e[2 * i + 1];
+            rows[o + 1] += gr * e[2 * i + 1] + gi * e[2 * i];
+          }
+        }
+      }
+      const map = new Float64Array(size * size);
+      const norm = 1 / cells;
+      for (let b = 0; b < size; b++) {
+        const e = ey[b];
+        for (let a = 0; a < size; a++) {
+          let re = 0;
+          let im = 0;
+          for (let j = 0; j < n; j++) {
+            const o = 2 * (j * size + a);
+            re += rows[o] * e[2 * j] - rows[o + 1] * e[2 * j + 1];
+            im += rows[o] * e[2 * j + 1] + rows[o + 1] * e[2 * j];
+          }
+          map[b * size + a] = (re * re + im * im) * norm * norm;
+        }
+      }
+      return map;
+    },
+    projectedPower(wave: IdealWave) {
+      const k = (2 * Math.PI) / wavelength;
+      let re = 0;
+      let im = 0;
+      for (let j = 0; j < n; j++) {
+        const py = centreY(j);
+        const dy = py - sourceAxis.y;
+        for (let i = 0; i < n; i++) {
+          const c = j * n + i;
+          const tr = transmission[2 * c];
+          const ti = transmission[2 * c + 1];
+          if (tr === 0 && ti === 0) continue;
+          const px = centreX(i);
+          const dx = px - sourceAxis.x;
+          waveWeight(wave, illumination, k, px, py, dx * dx + dy * dy, value);
+          re += tr * value[0] - ti * value[1];
+          im += tr * value[1] + ti * value[0];
+        }
+      }
+      re *= pitch * pitch;
+      im *= pitch * pitch;
+      return (re * re + im * im) / (incidentPower * incidentPower);
+    },
+    idealPeakIntensity(x, y, z) {
+      const k = (2 * Math.PI) / wavelength;
+      let amplitude = 0;
+      for (let j = 0; j < n; j++) {
+        const py = centreY(j);
+        for (let i = 0; i < n; i++) {
+          const ap = apertureCoverage[j * n + i];
+          if (ap === 0) continue;
+          const px = centreX(i);
+          incidentField(illumination, k, (px - sourceAxis.x) ** 2 + (py - sourceAxis.y) ** 2, inc);
+          amplitude += ap * Math.hypot(inc[0], inc[1]) * kernelMagnitude(k, px - x, py - y, z);
+        }
+      }
+      amplitude *= pitch * pitch;
+      return amplitude * amplitude;
+    },
+  };
+}

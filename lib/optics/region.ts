@@ -1,0 +1,142 @@
+import type { Region } from '../design/types';
+
+export interface Box {
+  x0: number;
+  y0: number;
+  x1: number;
+  y1: number;
+}
+
+/** Whether (x, y) lies in the region (boundaries count as inside). */
+export function regionContains(region: Region, x: number, y: number): boolean {
+  switch (region.kind) {
+    case 'circle':
+      return (x - region.cx) ** 2 + (y - region.cy) ** 2 <= region.r ** 2;
+    case 'ring': {
+      const d2 = (x - region.cx) ** 2 + (y - region.cy) ** 2;
+      return d2 >= region.rInner ** 2 && d2 <= region.rOuter ** 2;
+    }
+    case 'rectangle':
+      return x >= Math.min(region.x0, region.x1) && x <= Math.max(region.x0, region.x1) && y >= Math.min(region.y0, region.y1) && y <= Math.max(region.y0, region.y1);
+    case 'polygon':
+      return polygonContains(region.points, x, y);
+    case 'union':
+      return region.parts.some((part) => regionContains(part, x, y));
+    case 'intersection':
+      return region.parts.every((part) => regionContains(part, x, y));
+    case 'difference':
+      return regionContains(region.parts[0], x, y) && !region.parts.slice(1).some((part) => regionContains(part, x, y));
+  }
+}
+
+/** Even-odd point-in-polygon test on flat x,y pairs. */
+export function polygonContains(points: ArrayLike<number>, x: number, y: number): boolean {
+  let inside = false;
+  const n = points.length;
+  for (let i = 0, j = n - 2; i < n; j = i, i += 2) {
+    const yi = points[i + 1];
+    const yj = points[j + 1];
+    if (yi > y !== yj > y) {
+      const xCross = points[i] + ((y - yi) * (points[j] - points[i])) / (yj - yi);
+      if (x < xCross) inside = !inside;
+    }
+  }
+  return inside;
+}
+
+/** Axis-aligned bounds of a region (of its first part for a difference, the overlap for an intersection). */
+export function regionBounds(region: Region): Box {
+  switch (region.kind) {
+    case 'circle':
+      return { x0: region.cx - region.r, y0: region.cy - region.r, x1: region.cx + region.r, y1: region.cy + region.r };
+    case 'ring':
+      return { x0: region.cx - region.rOuter, y0: region.cy - region.rOuter, x1: region.cx + region.rOuter, y1: region.cy + region.rOuter };
+    case 'rectangle':
+      return { x0: Math.min(region.x0, region.x1), y0: Math.min(region.y0, region.y1), x1: Math.max(region.x0, region.x1), y1: Math.max(region.y0, region.y1) };
+    case 'polygon':
+      return polygonsBounds([region.points]);
+    case 'union':
+      return region.parts.map(regionBounds).reduce(unionBox);
+    case 'intersection':
+      return region.parts.map(regionBounds).reduce((a, b) => ({ x0: Math.max(a.x0, b.x0), y0: Math.max(a.y0, b.y0), x1: Math.min(a.x1, b.x1), y1: Math.min(a.y1, b.y1) }));
+    case 'difference':
+      return regionBounds(region.parts[0]);
+  }
+}
+
+export function polygonsBounds(polygons: ArrayLike<number>[]): Box {
+  let box: Box = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
+  for (const p of polygons) {
+    for (let i = 0; i < p.length; i += 2) {
+      box = { x0: Math.min(box.x0, p[i]), y0: Math.min(box.y0, p[i + 1]), x1: Math.max(box.x1, p[i]), y1: Math.max(box.y1, p[i + 1]) };
+    }
+  }
+  return box;
+}
+
+function unionBox(a: Box, b: Box): Box {
+  return { x0: Math.min(a.x0, b.x0), y0: Math.min(a.y0, b.y0), x1: Math.max(a.x1, b.x1), y1: Math.max(a.y1, b.y1) };
+}
+
+/**
+ * The radius intervals [a0, b0, a1, b1, …] the region covers along any ray from (cx, cy), when the
+ * region is built from circles and rings centred there; null when it is not rotationally symmetric about it.
+ */
+export function regionRadialIntervals(region: Region, cx: number, cy: number, tolerance: number): number[] | null {
+  const centred = (x: number, y: number) => Math.abs(x - cx) <= tolerance && Math.abs(y - cy) <= tolerance;
+  switch (region.kind) {
+    case 'circle':
+      return centred(region.cx, region.cy) ? [0, region.r] : null;
+    case 'ring':
+      return centred(region.cx, region.cy) ? [region.rInner, region.rOuter] : null;
+    case 'rectangle':
+    case 'polygon':
+      return null;
+    default: {
+      const parts = region.parts.map((part) => regionRadialIntervals(part, cx, cy, tolerance));
+      if (parts.some((p) => p === null)) return null;
+      const sets = parts as number[][];
+      if (region.kind === 'union') return sets.reduce(unionIntervals);
+      if (region.kind === 'intersection') return sets.reduce(intersectIntervals);
+      return sets.slice(1).reduce((acc, cut) => intersectIntervals(acc, complementIntervals(cut)), sets[0]);
+    }
+  }
+}
+
+/** Union of two sorted, disjoint interval lists (flat [a, b, …]). */
+export function unionIntervals(a: number[], b: number[]): number[] {
+  const all: Array<[number, number]> = [];
+  for (const list of [a, b]) for (let i = 0; i < list.length; i += 2) all.push([list[i], list[i + 1]]);
+  all.sort((p, q) => p[0] - q[0]);
+  const out: number[] = [];
+  for (const [s, e] of all) {
+    if (out.length > 0 && s <= out[out.length - 1]) out[out.length - 1] = Math.max(out[out.length - 1], e);
+    else out.push(s, e);
+  }
+  return out;
+}
+
+function intersectIntervals(a: number[], b: number[]): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < a.length; i += 2) {
+    for (let j = 0; j < b.length; j += 2) {
+      const s = Math.max(a[i], b[j]);
+      const e = Math.min(a[i + 1], b[j + 1]);
+      if (e > s) out.push(s, e);
+    }
+  }
+  return out;
+}
+
+function complementIntervals(a: number[]): number[] {
+  const out = [0];
+  for (let i = 0; i < a.length; i += 2) out.push(a[i], a[i + 1]);
+  out.push(Infinity);
+  return dropEmpty(out);
+}
+
+function dropEmpty(flat: number[]): number[] {
+  const out: number[] = [];
+  for (let i = 0; i < flat.length; i += 2) if (flat[i + 1] > flat[i]) out.push(flat[i], flat[i + 1]);
+  return out;
+}
