@@ -13,6 +13,7 @@ import { can } from '../../lib/auth/permissions';
 import type { TeamRole } from '../../lib/auth/roles';
 import { sendMail } from '../../lib/mail';
 import { releasedToFabEmail, reviewOutcomeEmail, reviewRequestedEmail, type RenderedEmail, type RevisionMailContext } from '../../lib/mail/templates';
+import { allowedMoves } from '../../lib/workflow/allowed-moves';
 import { moveNotification, type MemberContact, type NotificationKind } from '../../lib/workflow/notifications';
 import { MOVE_RULES, STATE_LABELS, isRevisionState, planMove, type RevisionMove, type RevisionState } from '../../lib/workflow/states';
 
@@ -255,4 +256,22 @@ export async function applyMove(input: MoveInput): Promise<Outcome<MoveResult & 
   if (!pending.ok) return pending;
   const { notify, ...result } = pending;
   return { ...result, notifications: await notify() };
+}
+
+export interface MoveChoices {
+  state: RevisionState;
+  /** the moves the user may make now, with their button labels */
+  moves: { move: RevisionMove; label: string }[];
+  /** why a reviewer sees no approval buttons on this revision, when that is the reason */
+  ownRevision: boolean;
+}
+
+/** What the signed-in user may do with a revision now (for the move buttons). */
+export async function moveChoices(revisionId: string, userId: string): Promise<Outcome<MoveChoices>> {
+  const access = await loadRevisionAccess(db, revisionId, userId);
+  if (!access || access.role === null) return refuse(404, REVISION_NOT_FOUND);
+  const actor = { userId, role: access.role };
+  const moves = allowedMoves(access.revision.state, actor, access.revision.authorId).map((move) => ({ move, label: MOVE_RULES[move].label }));
+  const ownRevision = access.role === 'reviewer' && access.revision.authorId === userId && access.revision.state === 'in_review';
+  return { ok: true, state: access.revision.state, moves, ownRevision };
 }

@@ -41,3 +41,23 @@ export function resolveMentions<M extends MentionableMember>(text: string, membe
   }
   return { members: found, unknown };
 }
+
+export interface TextSegment {
+  text: string;
+  /** the handle, when this segment is a mention ("@reviewer") */
+  mention?: string;
+}
+
+/** Cuts `text` into plain runs and mentions, so a view can set mentions apart. */
+export function splitMentions(text: string): TextSegment[] {
+  const segments: TextSegment[] = [];
+  let last = 0;
+  for (const match of text.matchAll(MENTION)) {
+    const at = match.index + match[0].length - match[1].length - 1;
+    if (at > last) segments.push({ text: text.slice(last, at) });
+    segments.push({ text: `@${match[1]}`, mention: match[1].toLowerCase() });
+    last = at + match[1].length + 1;
+  }
+  if (last < text.length) segments.push({ text: text.slice(last) });
+  return segments;
+}

@@ -1,4 +1,4 @@
-import { applyMove } from '@/db/queries/review';
+import { applyMove, moveChoices } from '@/db/queries/review';
 import { appUrl } from '@/app/_server/app-url';
 import { apiError, handle, json, parseBody } from '@/app/_server/http';
 import { requireUser } from '@/app/_server/session';
@@ -18,4 +18,12 @@ export const POST = handle<{ revisionId: string }>(async (request, { params }) =
     stateLabel: STATE_LABELS[outcome.to],
     emailed: outcome.notifications.filter((n) => n.sent).map((n) => n.to),
   });
+});
+
+/** The revision's state and the moves the caller may make now. */
+export const GET = handle<{ revisionId: string }>(async (_request, { params }) => {
+  const user = await requireUser();
+  const outcome = await moveChoices(params.revisionId, user.id);
+  if (!outcome.ok) throw apiError(outcome.status, outcome.message);
+  return json({ state: outcome.state, stateLabel: STATE_LABELS[outcome.state], moves: outcome.moves, ownRevision: outcome.ownRevision });
 });
