@@ -47,6 +47,9 @@ zw_start_mail() { zw_service_start "mail-fake${1:+-$1}" "$SMTP_PORT" "$ZW_ROOT/n
 # The built Next.js app on 127.0.0.1:$PORT.
 zw_start_app() { zw_service_start "app${1:+-$1}" "$PORT" "$ZW_ROOT/node_modules/.bin/next" start -H 127.0.0.1 -p "$PORT"; }
 
+# The export worker (pg-boss queues in $DATABASE_URL); no port, it only talks to PostgreSQL.
+zw_start_worker() { zw_service_start "worker${1:+-$1}" "" "$ZW_ROOT/node_modules/.bin/tsx" scripts/worker.ts; }
+
 # All services a run has, in start order; a suffix (e.g. "test") keeps test services apart from `up`'s.
-zw_start_services() { zw_start_mail "${1:-}"; zw_start_app "${1:-}"; }
-zw_stop_services() { zw_service_stop "app${1:+-$1}"; zw_service_stop "mail-fake${1:+-$1}"; }
+zw_start_services() { zw_start_mail "${1:-}"; zw_start_worker "${1:-}"; zw_start_app "${1:-}"; }
+zw_stop_services() { zw_service_stop "app${1:+-$1}"; zw_service_stop "worker${1:+-$1}"; zw_service_stop "mail-fake${1:+-$1}"; }
