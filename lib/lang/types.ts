@@ -50,10 +50,10 @@ export function formatType(t: Ty): string {
       const unit = unitOf(t.L, t.A);
       if (t.varies && t.L === 0) return `phase field${unit ? ` (${unit})` : ' (plain number, read as rad)'}`;
       const base = `${dimensionName(t.L, t.A)}${unit ? ` (${unit})` : ''}`;
-      return t.varies ? `${base}, varies with position` : base;
+      return t.varies ? `position-dependent ${base}` : base;
     }
     case 'bool':
-      return t.varies ? 'condition, varies with position' : 'condition';
+      return t.varies ? 'position-dependent condition' : 'condition';
     case 'text':
       return 'text';
     case 'tuple':
