@@ -5,7 +5,7 @@ import { planGrid } from './grid-plan';
 import type { MaskModel } from './mask-model';
 import { readRadialMask } from './radial-mask';
 import { createRadialEngine } from './radial-engine';
-import { polygonCoverage, regionCoverage } from './raster-coverage';
+import { polygonCoverage, regionCoverage, stateCoverage } from './raster-coverage';
 import { polygonContains, regionContains, type Box } from './region';
 import type { Illumination, SimulationOptions } from './types';
 
@@ -51,12 +51,12 @@ export function buildEngine(design: CompiledDesign, mask: MaskModel, illuminatio
     throw new Error('the radial method needs a design with a symmetry centre and every focus on its axis');
   }
   const plan = planGrid(design, mask, options.maxGrid ?? 2048);
-  const layerCoverage = mask.layers.map((layer) => polygonCoverage(layer.polygons, plan.grid));
+  const states = stateCoverage(mask.layers.map((layer) => layer.polygons), plan.grid);
   const aperture = mask.aperturePolygons ? polygonCoverage(mask.aperturePolygons, plan.grid) : regionCoverage(mask.apertureRegion, plan.grid);
   if (plan.scaled) cropToBox(aperture, plan.grid, plan.region);
   const axis = { x: 0.5 * (plan.region.x0 + plan.region.x1), y: 0.5 * (plan.region.y0 + plan.region.y1) };
   if (plan.scaled) warnings.push(`the zones are too fine for the whole aperture on one grid: ${plan.note}; efficiencies are fractions of the light on that region and spots are wider than the full lens would give`);
-  const engine = createGridEngine(mask, plan.grid, layerCoverage, aperture, illumination, axis, {
+  const engine = createGridEngine(mask, plan.grid, states, aperture, illumination, axis, {
     method: plan.scaled ? 'scaled-region' : 'fft-2d',
     note: `angular spectrum on a ${plan.grid.n}² grid of ${plan.grid.pitch.toPrecision(3)} µm pixels (${plan.note}), zero-padded to twice the simulated width, polygons rasterised with area coverage`,
     gridSize: plan.grid.n,

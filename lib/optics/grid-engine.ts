@@ -2,7 +2,7 @@ import type { OpticsEngine } from './engine';
 import { fft2d } from './fft2d';
 import { incidentField } from './illumination';
 import { kernelMagnitude, waveWeight, type IdealWave } from './ideal-wave';
-import { mixedTransmission, type MaskModel } from './mask-model';
+import { stateTransmission, type MaskModel } from './mask-model';
 import type { Grid } from './raster-coverage';
 import type { Illumination, Sampling } from './types';
 
@@ -17,7 +17,8 @@ import type { Illumination, Sampling } from './types';
 export function createGridEngine(
   mask: MaskModel,
   grid: Grid,
-  layerCoverage: Float32Array[],
+  /** from stateCoverage: index s > 0 holds the fraction of each pixel where exactly the layers in s are drawn */
+  stateCoverage: Float32Array[],
   apertureCoverage: Float32Array,
   illumination: Illumination,
   sourceAxis: { x: number; y: number },
@@ -35,13 +36,18 @@ export function createGridEngine(
   let wavelength = mask.designWavelength;
   const value = new Float64Array(2);
   const inc = new Float64Array(2);
-  const drawn = new Float64Array(layerCoverage.length);
+  const stateValues = new Float64Array(2 * stateCoverage.length);
 
   let incidentPower = 0;
   let area = 0;
   const setWavelength = (lambda: number) => {
     wavelength = lambda;
     const k = (2 * Math.PI) / lambda;
+    for (let state = 0; state < stateCoverage.length; state++) {
+      stateTransmission(mask, state, lambda, value);
+      stateValues[2 * state] = value[0];
+      stateValues[2 * state + 1] = value[1];
+    }
     incidentPower = 0;
     area = 0;
     for (let j = 0; j < n; j++) {
@@ -50,17 +56,24 @@ export function createGridEngine(
         const c = j * n + i;
         const ap = apertureCoverage[c];
         if (ap === 0) {
-          transmission[2 * c] = transmission[2 * c + 1] = spectrum[2 * c] = spectrum[2 * c + 1] = 0;
+          spectrum[2 * c] = spectrum[2 * c + 1] = 0;
           continue;
         }
-        for (let l = 0; l < drawn.length; l++) drawn[l] = layerCoverage[l][c];
-        mixedTransmission(mask, drawn, lambda, value);
+        // area average over the pixel of the drawn states' transmissions
+        let rest = 1;
+        let tr = 0;
+        let ti = 0;
+        for (let state = 1; state < stateCoverage.length; state++) {
+          const f = stateCoverage[state][c];
+          if (f === 0) continue;
+          rest -= f;
+          tr += f * stateValues[2 * state];
+          ti += f * stateValues[2 * state + 1];
+        }
+        tr = ap * (tr + rest * stateValues[0]);
+        ti = ap * (ti + rest * stateValues[1]);
         const dx = centreX(i) - sourceAxis.x;
         incidentField(illumination, k, dx * dx + dy * dy, inc);
-        const tr = ap * value[0];
-        const ti = ap * value[1];
-        transmission[2 * c] = tr;
-        transmission[2 * c + 1] = ti;
         spectrum[2 * c] = tr * inc[0] - ti * inc[1];
         spectrum[2 * c + 1] = tr * inc[1] + ti * inc[0];
         incidentPower += ap * (inc[0] * inc[0] + inc[1] * inc[1]) * pitch * pitch;
@@ -68,7 +81,46 @@ export function createGridEngine(
       }
     }
     fft2d(spectrum, n, false);
+    undoPixelAveraging();
   };
+
+  /**
+   * Area coverage box-filters the mask before sampling, which damps its spectrum by sinc(π·fx·p)·sinc(π·fy·p)
+   * (up to 36 % at Nyquist). Dividing it out restores the mask's own band-limited spectrum; the
+   * transmission used for projections is brought back from it so both see the same mask.
+   */
+  function undoPixelAveraging(): void {
+    const sinc = new Float64Array(n);
+    for (let j = 0; j < n; j++) {
+      const a = Math.PI * frequency[j] * pitch;
+      sinc[j] = a === 0 ? 1 : Math.sin(a) / a;
+    }
+    for (let j = 0; j < n; j++) {
+      for (let i = 0; i < n; i++) {
+        const c = 2 * (j * n + i);
+        const g = 1 / (sinc[i] * sinc[j]);
+        spectrum[c] *= g;
+        spectrum[c + 1] *= g;
+      }
+    }
+    transmission.set(spectrum);
+    fft2d(transmission, n, true);
+    const k = (2 * Math.PI) / wavelength;
+    for (let j = 0; j < n; j++) {
+      const dy = centreY(j) - sourceAxis.y;
+      for (let i = 0; i < n; i++) {
+        const c = 2 * (j * n + i);
+        const dx = centreX(i) - sourceAxis.x;
+        incidentField(illumination, k, dx * dx + dy * dy, inc);
+        // t = field / incident
+        const m = inc[0] * inc[0] + inc[1] * inc[1];
+        const fr = transmission[c];
+        const fi = transmission[c + 1];
+        transmission[c] = (fr * inc[0] + fi * inc[1]) / m;
+        transmission[c + 1] = (fi * inc[0] - fr * inc[1]) / m;
+      }
+    }
+  }
   setWavelength(wavelength);
 
   /** Band limit per axis for propagation to z, and the squared cut-off of propagating waves. */
@@ -98,12 +150,12 @@ export function createGridEngine(
       const ex = phasors(x - centreX(0));
       const ey = phasors(y - centreY(0));
       // active spectrum entries: current term P = A·e^{i2π(fx x + fy y)}·e^{i kz z} and step S = e^{i kz dz}
-      const terms: number[] = [];
+      let m = 0;
+      const terms = new Int32Array(cells);
       for (let j = 0; j < n; j++) {
         if (Math.abs(frequency[j]) >= axis) continue;
-        for (let i = 0; i < n; i++) if (Math.abs(frequency[i]) < axis && frequency[i] ** 2 + frequency[j] ** 2 < radial2) terms.push(j * n + i);
+        for (let i = 0; i < n; i++) if (Math.abs(frequency[i]) < axis && frequency[i] ** 2 + frequency[j] ** 2 < radial2) terms[m++] = j * n + i;
       }
-      const m = terms.length;
       const P = new Float64Array(2 * m);
       const S = new Float64Array(2 * m);
       for (let q = 0; q < m; q++) {

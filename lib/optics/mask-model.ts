@@ -61,31 +61,18 @@ export function readMaskModel(design: CompiledDesign, library: LayoutLibrary): M
 }
 
 /**
- * Complex transmission of a spot where layer k covers the fraction drawn[k] of it, at wavelength λ,
- * written to out[0], out[1]. Layers combine as independent factors, which is exact wherever at most
- * one layer edge crosses the spot (an area average of exp(iθ) otherwise needs the overlap).
+ * Complex transmission where exactly the layers in `drawn` (bit k set = layer k drawn) are drawn, at
+ * wavelength λ, written to out[0], out[1].
  */
-export function mixedTransmission(mask: MaskModel, drawn: ArrayLike<number>, wavelength: number, out: Float64Array): void {
-  if (mask.modulation === 'amplitude') {
-    const layer = mask.layers[0];
-    out[0] = layer.inverted ? 1 - drawn[0] : drawn[0];
-    out[1] = 0;
-    return;
-  }
-  let re = 1;
-  let im = 0;
-  const scale = mask.designWavelength / wavelength;
-  for (let k = 0; k < mask.layers.length; k++) {
-    const layer = mask.layers[k];
-    const s = layer.inverted ? 1 - drawn[k] : drawn[k];
-    if (s === 0) continue;
-    const theta = layer.phaseStep * scale;
-    const fRe = 1 - s + s * Math.cos(theta);
-    const fIm = s * Math.sin(theta);
-    const nextRe = re * fRe - im * fIm;
-    im = re * fIm + im * fRe;
-    re = nextRe;
-  }
-  out[0] = re;
-  out[1] = im;
+export function stateTransmission(mask: MaskModel, drawn: number, wavelength: number, out: Float64Array): void {
+  let phase = 0;
+  let amplitude = 1;
+  mask.layers.forEach((layer, k) => {
+    const on = ((drawn >> k) & 1) === 1 !== layer.inverted;
+    if (mask.modulation === 'amplitude') amplitude = on ? 1 : 0;
+    else if (on) phase += layer.phaseStep;
+  });
+  const scaled = (phase * mask.designWavelength) / wavelength;
+  out[0] = amplitude * Math.cos(scaled);
+  out[1] = amplitude * Math.sin(scaled);
 }

@@ -1,7 +1,7 @@
 import type { OpticsEngine } from './engine';
 import { incidentField, incidentPhaseSpan } from './illumination';
 import { kernelMagnitude, waveWeight, type IdealWave } from './ideal-wave';
-import { mixedTransmission, type MaskModel } from './mask-model';
+import { stateTransmission, type MaskModel } from './mask-model';
 import type { RadialMask } from './radial-mask';
 import { radialField, radialProjection, type RadialTransmission } from './radial-field';
 import type { Illumination, Sampling } from './types';
@@ -15,10 +15,10 @@ export function createRadialEngine(mask: MaskModel, radial: RadialMask, centre: 
   const value = new Float64Array(2);
   const setWavelength = (lambda: number) => {
     wavelength = lambda;
-    const drawn = new Float64Array(radial.layers);
     for (let s = 0; s < segments; s++) {
-      for (let k = 0; k < radial.layers; k++) drawn[k] = radial.drawn[s * radial.layers + k];
-      mixedTransmission(mask, drawn, lambda, value);
+      let drawn = 0;
+      for (let k = 0; k < radial.layers; k++) drawn |= radial.drawn[s * radial.layers + k] << k;
+      stateTransmission(mask, drawn, lambda, value);
       t.tRe[s] = value[0];
       t.tIm[s] = value[1];
     }

@@ -17,6 +17,8 @@ export interface RadialMask {
 }
 
 const RAY_COUNT = 12;
+/** Transitions closer than this (µm) along a ray are one transition. */
+const SNAP_UM = 0.005;
 
 /**
  * Reads the radial transitions along several rays from the symmetry centre and averages their radii,
@@ -54,9 +56,13 @@ export function readRadialMask(mask: MaskModel, cx: number, cy: number): RadialM
 
 /** Splits one ray into segments of constant layer states inside the aperture. */
 function segmentRay(aperture: number[], layerIntervals: number[][]): { signature: string; edges: number[]; states: number[][] } {
-  const cuts = new Set<number>(aperture);
-  for (const list of layerIntervals) for (const v of list) cuts.add(v);
-  const sorted = [...cuts].sort((a, b) => a - b);
+  const all = [...aperture, ...layerIntervals.flat()].sort((a, b) => a - b);
+  // edges of different layers meant to coincide differ by chords and rounding: read them as one
+  const sorted: number[] = [];
+  for (const v of all) {
+    if (sorted.length > 0 && v - sorted[sorted.length - 1] < SNAP_UM) continue;
+    sorted.push(v);
+  }
   const edges: number[] = [];
   const states: number[][] = [];
   const inAperture = monotoneMembership(aperture);

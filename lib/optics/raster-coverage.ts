@@ -11,15 +11,20 @@ export interface Grid {
 
 const SUB_ROWS = 8;
 
+interface Edge {
+  id: number;
+  xa: number;
+  ya: number;
+  xb: number;
+  yb: number;
+}
+
 /**
- * Fraction of every pixel covered by the union of the polygons (each even-odd filled): exact across each
- * of SUB_ROWS scan lines per pixel row, so edges are antialiased. Row-major n×n.
+ * A scanner over the grid's scan lines (SUB_ROWS per pixel row, taken in increasing order): each call
+ * returns that line's inside spans of the union of the polygons (each even-odd filled), sorted and merged.
  */
-export function polygonCoverage(polygons: Float64Array[], grid: Grid): Float32Array {
-  const { x0, y0, pitch, n } = grid;
-  const coverage = new Float32Array(n * n);
-  // edge table: polygon id, endpoints with ya < yb
-  const edges: Array<{ id: number; xa: number; ya: number; xb: number; yb: number }> = [];
+function spanScanner(polygons: Float64Array[], grid: Grid): (line: number) => Array<[number, number]> {
+  const edges: Edge[] = [];
   polygons.forEach((p, id) => {
     for (let i = 0, j = p.length - 2; i < p.length; j = i, i += 2) {
       const [xa, ya, xb, yb] = p[i + 1] < p[j + 1] ? [p[i], p[i + 1], p[j], p[j + 1]] : [p[j], p[j + 1], p[i], p[i + 1]];
@@ -28,34 +33,61 @@ export function polygonCoverage(polygons: Float64Array[], grid: Grid): Float32Ar
   });
   edges.sort((a, b) => a.ya - b.ya);
   let next = 0;
-  let active: typeof edges = [];
+  let active: Edge[] = [];
   const crossings: Array<{ id: number; x: number }> = [];
-  const spans: Array<[number, number]> = [];
-  const weight = 1 / SUB_ROWS;
-  for (let row = 0; row < n; row++) {
-    for (let sub = 0; sub < SUB_ROWS; sub++) {
-      const y = y0 + (row + (sub + 0.5) / SUB_ROWS) * pitch;
-      while (next < edges.length && edges[next].ya <= y) active.push(edges[next++]);
-      active = active.filter((e) => e.yb > y);
-      if (active.length === 0) continue;
-      crossings.length = 0;
-      for (const e of active) {
-        if (e.ya <= y) crossings.push({ id: e.id, x: e.xa + ((y - e.ya) * (e.xb - e.xa)) / (e.yb - e.ya) });
-      }
-      crossings.sort((a, b) => a.id - b.id || a.x - b.x);
-      spans.length = 0;
-      for (let i = 0; i + 1 < crossings.length; i += 2) spans.push([crossings[i].x, crossings[i + 1].x]);
-      spans.sort((a, b) => a[0] - b[0]);
-      let start = -Infinity;
-      let end = -Infinity;
-      for (const [s, e] of spans) {
-        if (s > end) {
-          if (end > start) addSpan(coverage, row, n, (start - x0) / pitch, (end - x0) / pitch, weight);
-          start = s;
-          end = e;
-        } else end = Math.max(end, e);
-      }
-      if (end > start) addSpan(coverage, row, n, (start - x0) / pitch, (end - x0) / pitch, weight);
+  return (line) => {
+    const y = grid.y0 + ((line + 0.5) / SUB_ROWS) * grid.pitch;
+    while (next < edges.length && edges[next].ya <= y) active.push(edges[next++]);
+    active = active.filter((e) => e.yb > y);
+    crossings.length = 0;
+    for (const e of active) crossings.push({ id: e.id, x: e.xa + ((y - e.ya) * (e.xb - e.xa)) / (e.yb - e.ya) });
+    crossings.sort((a, b) => a.id - b.id || a.x - b.x);
+    const raw: Array<[number, number]> = [];
+    for (let i = 0; i + 1 < crossings.length; i += 2) raw.push([crossings[i].x, crossings[i + 1].x]);
+    raw.sort((a, b) => a[0] - b[0]);
+    const spans: Array<[number, number]> = [];
+    for (const [s, e] of raw) {
+      const last = spans[spans.length - 1];
+      if (last && s <= last[1]) last[1] = Math.max(last[1], e);
+      else spans.push([s, e]);
+    }
+    return spans;
+  };
+}
+
+/** Fraction of every pixel covered by the union of the polygons, antialiased. Row-major n×n. */
+export function polygonCoverage(polygons: Float64Array[], grid: Grid): Float32Array {
+  const coverage = new Float32Array(grid.n * grid.n);
+  const scan = spanScanner(polygons, grid);
+  for (let line = 0; line < grid.n * SUB_ROWS; line++) {
+    const row = Math.floor(line / SUB_ROWS);
+    for (const [s, e] of scan(line)) addSpan(coverage, row, grid.n, (s - grid.x0) / grid.pitch, (e - grid.x0) / grid.pitch, 1 / SUB_ROWS);
+  }
+  return coverage;
+}
+
+/**
+ * Joint coverage of several layers: for every combination of drawn layers (bit k set = layer k drawn)
+ * except none, the fraction of each pixel in exactly that combination. A multi-level pixel that holds
+ * several level edges is then averaged correctly, which per-layer coverages alone cannot do.
+ */
+export function stateCoverage(layers: Float64Array[][], grid: Grid): Float32Array[] {
+  const { n, x0, pitch } = grid;
+  const states = 2 ** layers.length;
+  const coverage = Array.from({ length: states }, (_, s) => (s === 0 ? new Float32Array(0) : new Float32Array(n * n)));
+  const scanners = layers.map((polygons) => spanScanner(polygons, grid));
+  for (let line = 0; line < n * SUB_ROWS; line++) {
+    const row = Math.floor(line / SUB_ROWS);
+    const events: Array<{ x: number; bit: number; enter: boolean }> = [];
+    scanners.forEach((scan, k) => {
+      for (const [s, e] of scan(line)) events.push({ x: s, bit: 1 << k, enter: true }, { x: e, bit: 1 << k, enter: false });
+    });
+    events.sort((a, b) => a.x - b.x);
+    let state = 0;
+    for (let i = 0; i < events.length; i++) {
+      state = events[i].enter ? state | events[i].bit : state & ~events[i].bit;
+      const next = events[i + 1];
+      if (state !== 0 && next && next.x > events[i].x) addSpan(coverage[state], row, n, (events[i].x - x0) / pitch, (next.x - x0) / pitch, 1 / SUB_ROWS);
     }
   }
   return coverage;
