@@ -5,38 +5,19 @@
 import path from 'node:path';
 import { closeDb } from '@/db';
 import { databaseUrl } from '@/db/url';
-import { exportStore, markBuildFailed } from '@/db/queries/revisions';
+import { exportStore } from '@/db/queries/revisions';
 import { getBoss, stopBoss } from '@/lib/jobs/boss';
-import { runExportJob } from '@/lib/jobs/export-job';
-import { EXPORT_DEAD_QUEUE, EXPORT_EXPIRE_SECONDS, EXPORT_QUEUE, isExportJobPayload } from '@/lib/jobs/queues';
+import { EXPORT_EXPIRE_SECONDS, EXPORT_QUEUE } from '@/lib/jobs/queues';
 import { threadedExporter } from '@/lib/jobs/threaded-exporter';
+import { workExportQueues } from '@/lib/jobs/work-queues';
 
 /** Wall-clock budget of one export; beyond it the export thread is stopped and the revision fails. */
-const EXPORT_BUDGET_MS = Number(process.env.ZW_EXPORT_BUDGET_MS ?? 120_000);
+const EXPORT_BUDGET_MS = Math.min(Number(process.env.ZW_EXPORT_BUDGET_MS ?? 120_000), (EXPORT_EXPIRE_SECONDS - 10) * 1000);
 
 async function main(): Promise<void> {
   const boss = await getBoss(databaseUrl(), { worker: true });
-  const exporter = threadedExporter({
-    modulePath: path.join(__dirname, '..', 'lib', 'jobs', 'export-revision.ts'),
-    budgetMs: Math.min(EXPORT_BUDGET_MS, (EXPORT_EXPIRE_SECONDS - 10) * 1000),
-  });
-
-  await boss.work(EXPORT_QUEUE, { batchSize: 1, pollingIntervalSeconds: 0.5 }, async ([job]) => {
-    if (!isExportJobPayload(job.data)) return;
-    const result = await runExportJob(job.data.revisionId, exportStore, exporter);
-    console.log(`[worker] revision ${job.data.revisionId}: ${result.status}${result.message ? ` (${result.message})` : ''}`);
-  });
-
-  // pg-boss gave up on the job (worker crash, time-out, database trouble): the revision must not stay "running".
-  await boss.work(EXPORT_DEAD_QUEUE, { batchSize: 1, pollingIntervalSeconds: 1 }, async ([job]) => {
-    if (!isExportJobPayload(job.data)) return;
-    await markBuildFailed(
-      job.data.revisionId,
-      'The export did not finish: the worker stopped or the job ran out of time. Nothing was stored; retry the revision.',
-    );
-    console.log(`[worker] revision ${job.data.revisionId}: failed after the job was dead-lettered`);
-  });
-
+  const exporter = threadedExporter({ modulePath: path.join(__dirname, '..', 'lib', 'jobs', 'export-revision.ts'), budgetMs: EXPORT_BUDGET_MS });
+  await workExportQueues(boss, { store: exportStore, exporter, log: (line) => console.log(`[worker] ${line}`) });
   console.log(`[worker] working queue ${EXPORT_QUEUE} (budget ${EXPORT_BUDGET_MS} ms per export)`);
 
   let stopping = false;

@@ -9,12 +9,20 @@ type Holder = { boss?: Promise<PgBoss> };
 // Kept on globalThis so the dev server's module reloads reuse one connection.
 const holder = globalThis as unknown as { __zonewrightBoss?: Holder };
 
-async function ensureQueues(boss: PgBoss): Promise<void> {
+/** A pair of export queues; the tests use their own names so a running worker cannot take their jobs. */
+export interface ExportQueueNames {
+  work: string;
+  dead: string;
+}
+
+export const DEFAULT_EXPORT_QUEUES: ExportQueueNames = { work: EXPORT_QUEUE, dead: EXPORT_DEAD_QUEUE };
+
+export async function ensureExportQueues(boss: PgBoss, names: ExportQueueNames = DEFAULT_EXPORT_QUEUES): Promise<void> {
   // createQueue is idempotent; the dead-letter queue must exist before the queue that names it.
-  await boss.createQueue(EXPORT_DEAD_QUEUE);
-  await boss.createQueue(EXPORT_QUEUE, {
-    name: EXPORT_QUEUE,
-    deadLetter: EXPORT_DEAD_QUEUE,
+  await boss.createQueue(names.dead);
+  await boss.createQueue(names.work, {
+    name: names.work,
+    deadLetter: names.dead,
     retryLimit: EXPORT_RETRY_LIMIT,
     retryDelay: 2,
     expireInSeconds: EXPORT_EXPIRE_SECONDS,
@@ -36,7 +44,7 @@ export function getBoss(connectionString: string, options: { worker: boolean }):
     h.boss = boss
       .start()
       .then(async () => {
-        await ensureQueues(boss);
+        await ensureExportQueues(boss);
         return boss;
       })
       .catch((error) => {
@@ -56,8 +64,8 @@ export async function stopBoss(): Promise<void> {
 }
 
 /** Queues the export of one revision; returns the job id. */
-export async function sendExportJob(boss: PgBoss, payload: ExportJobPayload): Promise<string> {
-  const id = await boss.send(EXPORT_QUEUE, payload);
+export async function sendExportJob(boss: PgBoss, payload: ExportJobPayload, queue = EXPORT_QUEUE): Promise<string> {
+  const id = await boss.send(queue, payload);
   if (!id) throw new Error('the job queue did not accept the export job');
   return id;
 }

@@ -1,0 +1,80 @@
+/**
+ * The export queue end to end in the real PostgreSQL: a saved revision's job goes through pg-boss to
+ * the worker's handlers (the same registration scripts/worker.ts uses) and the revision ends ready or failed.
+ */
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { eq } from 'drizzle-orm';
+import { closeDb, db } from '@/db';
+import { databaseUrl } from '@/db/url';
+import { designs, revisions } from '@/db/schema';
+import { createRevision, exportStore } from '@/db/queries/revisions';
+import { randomUUID } from 'node:crypto';
+import { ensureExportQueues, getBoss, sendExportJob, stopBoss } from '@/lib/jobs/boss';
+import { threadedExporter } from '@/lib/jobs/threaded-exporter';
+import { DEAD_LETTER_MESSAGE, workExportQueues } from '@/lib/jobs/work-queues';
+import { makeTeam, type TestTeam } from '../review/fixtures';
+
+let team: TestTeam;
+// Queues of this file only: a worker started by scripts/test.sh works the real ones.
+const tag = randomUUID().slice(0, 8);
+const queues = { work: `revision-export-test-${tag}`, dead: `revision-export-test-${tag}-dead` };
+
+beforeAll(async () => {
+  team = await makeTeam();
+  const boss = await getBoss(databaseUrl(), { worker: true });
+  const exporter = threadedExporter({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), budgetMs: 5000 });
+  await ensureExportQueues(boss, queues);
+  await workExportQueues(boss, { store: exportStore, exporter, queues });
+});
+afterAll(async () => {
+  const boss = await getBoss(databaseUrl(), { worker: true });
+  await boss.deleteQueue(queues.work);
+  await boss.deleteQueue(queues.dead);
+  await stopBoss();
+  await closeDb();
+});
+
+async function save(source: string): Promise<string> {
+  const [d] = await db.select({ version: designs.version }).from(designs).where(eq(designs.id, team.designId));
+  return (await createRevision({ designId: team.designId, authorId: team.members.designer.id, source, message: 'queue test', baseVersion: d.version })).id;
+}
+
+async function settled(id: string, timeoutMs = 20_000) {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const [r] = await db.select().from(revisions).where(eq(revisions.id, id));
+    if (r.buildStatus === 'ready' || r.buildStatus === 'failed') return r;
+    if (Date.now() > until) throw new Error(`revision still ${r.buildStatus} after ${timeoutMs} ms`);
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+}
+
+describe('export queue', () => {
+  it('exports a queued revision through pg-boss', async () => {
+    const id = await save('# ok\n');
+    await sendExportJob(await getBoss(databaseUrl(), { worker: true }), { revisionId: id }, queues.work);
+    const r = await settled(id);
+    expect(r.buildStatus).toBe('ready');
+    expect(r.bundle?.byteLength).toBeGreaterThan(0);
+  });
+
+  it('fails a refused revision through pg-boss, with no bundle', async () => {
+    const id = await save('# refuse\n');
+    await sendExportJob(await getBoss(databaseUrl(), { worker: true }), { revisionId: id }, queues.work);
+    const r = await settled(id);
+    expect(r.buildStatus).toBe('failed');
+    expect(r.bundle).toBeNull();
+  });
+
+  it('a dead-lettered job fails its revision', async () => {
+    const id = await save('# ok\n');
+    // What pg-boss does when an export job exhausts its retries: a copy lands in the dead-letter queue.
+    const boss = await getBoss(databaseUrl(), { worker: true });
+    await boss.send(queues.dead, { revisionId: id });
+    const r = await settled(id);
+    expect(r.buildStatus).toBe('failed');
+    expect(r.buildError).toBe(DEAD_LETTER_MESSAGE);
+    expect(r.bundle).toBeNull();
+  });
+});
