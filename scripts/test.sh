@@ -1,0 +1,42 @@
+#!/usr/bin/env bash
+# npm test: every test on a fresh machine. Installs what is missing (Debian: postgresql, chromium,
+# python3-gdspy, klayout; npm ci), starts the cluster, recreates the zonewright_test database, migrates
+# and seeds it, builds the app and serves it on 127.0.0.1:3100 with the mail fake on 2526, runs
+# vitest over tests/, stops everything it started (even on failure) and exits with vitest's code.
+# Extra arguments go to vitest, e.g. `npm test -- tests/unit/lang`.
+set -euo pipefail
+export ZW_RUN=test
+source "$(dirname "${BASH_SOURCE[0]}")/lib/services.sh"
+source "$ZW_ROOT/scripts/lib/env.sh"
+cd "$ZW_ROOT"
+
+zw_apt_need /usr/bin/chromium chromium
+zw_apt_need klayout klayout
+/usr/bin/python3 -c 'import gdspy' 2>/dev/null || zw_apt_install python3-gdspy
+zw_node_modules
+
+pg_was_running=false
+bash scripts/pg.sh status >/dev/null 2>&1 && pg_was_running=true
+
+cleanup() {
+  local code=$?
+  zw_stop_services test || true
+  if [ "$pg_was_running" = false ]; then bash scripts/pg.sh stop || true; fi
+  exit "$code"
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+bash scripts/pg.sh start
+node_modules/.bin/tsx scripts/migrate.ts --recreate
+node_modules/.bin/tsx scripts/seed.ts
+zw_say "building the app (next build)"
+node_modules/.bin/next build >"$ZW_DATA/log/build-test.log" 2>&1 || { tail -n 60 "$ZW_DATA/log/build-test.log" >&2; zw_fail "next build failed (log: .data/log/build-test.log)"; }
+zw_start_services test
+
+set +e
+node_modules/.bin/vitest run "$@"
+status=$?
+set -e
+[ "$status" -eq 0 ] || zw_say "tests failed; service logs are in .data/log/"
+exit "$status"
