@@ -7,6 +7,7 @@ import { GeometryError } from '../geometry/errors';
 import { MaskOptionsError } from '../geometry/options';
 import { compileScript } from '../lang';
 import { concatBytes } from '../layout/concat-bytes';
+import { textBytes } from '../layout/text-bytes';
 import { buildExposureMatrix } from '../layout/exposure-matrix';
 import type { LayoutLibrary } from '../layout/types';
 import { oasisChunks } from '../oasis';
@@ -79,7 +80,7 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
   const contentFiles: BundleEntry[] = [
     { name: 'mask.gds', data: concatBytes(writerChunks(() => gdsiiChunks(library, { timestamp: settings.timestamp }))) },
     { name: 'mask.oas', data: concatBytes(writerChunks(() => oasisChunks(library, { compress: settings.compressOasis }))) },
-    { name: 'preview.svg', data: [...svgChunks(library, { title })].join('') },
+    { name: 'preview.svg', data: concatBytes(textBytes(svgChunks(library, { title }))) },
   ];
   const zones = radialZones(design);
   if (zones) contentFiles.push({ name: 'zones.csv', data: zoneTableCsv(zones) });

@@ -6,6 +6,8 @@ import { scaleBar } from './scale-bar';
 export interface SvgOptions {
   /** shown above the legend, e.g. the design name and revision */
   title?: string;
+  /** drawing size (the larger side) over the smallest detail kept; default 20,000 */
+  detail?: number;
 }
 
 /**
@@ -22,6 +24,7 @@ export function* svgChunks(library: LayoutLibrary, options: SvgOptions = {}): Ge
   const margin = 0.05 * Math.max(width, height);
   const font = 0.035 * Math.max(width, height);
   const styles = layerStyles(library.layers);
+  const resolution = Math.max(box.x1 - box.x0, box.y1 - box.y0) / (options.detail ?? 20_000);
   const cellLayerId = cellLayerIds(library);
   const legendRows = library.layers.length + 2;
   const legendHeight = legendRows * font * 1.6 + margin;
@@ -41,7 +44,7 @@ export function* svgChunks(library: LayoutLibrary, options: SvgOptions = {}): Ge
   for (const cell of library.cells) {
     for (const shapes of cell.shapes) {
       yield `<g id="${cellLayerId(cell.name, shapes.layer, shapes.datatype)}">\n`;
-      for (const polygon of shapes.polygons) yield `<path d="${pathData(polygon)}"/>\n`;
+      for (const polygon of shapes.polygons) yield `<path d="${pathData(polygon, resolution)}"/>\n`;
       for (const placement of cell.placements) yield useElement(placement, cellLayerId(placement.cell, shapes.layer, shapes.datatype));
       yield '</g>\n';
     }
@@ -103,9 +106,20 @@ function useElement(placement: LayoutPlacement, target: string): string {
   return out;
 }
 
-function pathData(polygon: ArrayLike<number>): string {
+/**
+ * Path data in DBU; a vertex closer than `resolution` (DBU, in both x and y) to the last one kept is dropped,
+ * since a preview is looked at, not fabricated, and this keeps very large designs small.
+ */
+function pathData(polygon: ArrayLike<number>, resolution: number): string {
   let d = `M${polygon[0]} ${polygon[1]}`;
-  for (let i = 2; i < polygon.length; i += 2) d += `L${polygon[i]} ${polygon[i + 1]}`;
+  let lastX = polygon[0];
+  let lastY = polygon[1];
+  for (let i = 2; i < polygon.length; i += 2) {
+    if (Math.abs(polygon[i] - lastX) < resolution && Math.abs(polygon[i + 1] - lastY) < resolution) continue;
+    lastX = polygon[i];
+    lastY = polygon[i + 1];
+    d += `L${lastX} ${lastY}`;
+  }
   return `${d}Z`;
 }
 
