@@ -150,9 +150,9 @@ export function CommentThread({ revisionId, anchorDraft, onAnchorClick }: Commen
 
   return (
     <section aria-label="Comments" className="flex flex-col gap-3" data-testid="comment-thread">
-      <h2 className="text-sm font-semibold">
-        Comments <span className="font-mono text-ink/60">{count}</span>
-      </h2>
+      <p className="text-xs text-ink/70" data-testid="comment-count">
+        <span className="font-mono">{count}</span> {count === 1 ? 'comment' : 'comments'}
+      </p>
       {list.isError ? <Notice tone="error">{errorText(list.error)}</Notice> : null}
       {list.isPending ? <p className="text-sm text-ink/60">Loading comments…</p> : null}
       {threads.length > 0 ? (
