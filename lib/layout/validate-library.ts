@@ -49,6 +49,8 @@ export function validateLibrary(library: LayoutLibrary): void {
       }
     }
   }
+  const cycle = placementCycle(library);
+  if (cycle) problems.push(`cells place each other in a loop: ${cycle.join(' → ')}`);
   if (problems.length > 0) throw new Error(`the layout cannot be written:\n  ${problems.join('\n  ')}`);
 }
 
@@ -58,4 +60,29 @@ function isLayerNumber(value: number): boolean {
 
 function isCoordinate(value: number): boolean {
   return Number.isInteger(value) && value >= INT32_MIN && value <= INT32_MAX;
+}
+
+/** A chain of cells that places itself, or null (depth-first search over placements). */
+function placementCycle(library: LayoutLibrary): string[] | null {
+  const children = new Map(library.cells.map((c) => [c.name, [...new Set(c.placements.map((p) => p.cell))]]));
+  const state = new Map<string, 'open' | 'done'>();
+  const path: string[] = [];
+  const visit = (name: string): string[] | null => {
+    if (state.get(name) === 'done') return null;
+    if (state.get(name) === 'open') return [...path.slice(path.indexOf(name)), name];
+    state.set(name, 'open');
+    path.push(name);
+    for (const child of children.get(name) ?? []) {
+      const found = visit(child);
+      if (found) return found;
+    }
+    path.pop();
+    state.set(name, 'done');
+    return null;
+  };
+  for (const cell of library.cells) {
+    const found = visit(cell.name);
+    if (found) return found;
+  }
+  return null;
 }

@@ -91,6 +91,9 @@ describe('GDSII record framing', () => {
     const dangling = oneTriangle();
     dangling.cells[0].placements.push({ cell: 'NOPE', x: 0, y: 0 });
     expect(() => writeGdsii(dangling)).toThrow(/unknown cell "NOPE"/);
+    const looped = handBuiltLibrary();
+    looped.cells[0].placements.push({ cell: 'TOP', x: 0, y: 0 });
+    expect(() => writeGdsii(looped)).toThrow(/place each other in a loop: UNIT → TOP → UNIT|TOP → UNIT → TOP/);
   });
 });
 
