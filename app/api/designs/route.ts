@@ -8,8 +8,8 @@ import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { db } from '@/db';
 import { designs } from '@/db/schema';
+import { createDesign } from '@/db/queries/designs';
 import { createDesignSchema } from '@/lib/schemas/designs';
-import { recordAudit } from '@/app/_server/audit';
 import { ApiError, handle, json, parseBody, parseQuery } from '@/app/_server/http';
 import { authorize, requireMember, requireUser } from '@/app/_server/session';
 
@@ -43,18 +43,13 @@ export const POST = handle(async (request, { requestId }) => {
   const member = await requireMember(input.teamId);
   authorize(member.actor, 'design.create');
   const workingScript = await exampleScript(input.example);
-  const [design] = await db
-    .insert(designs)
-    .values({
-      teamId: member.team.id,
-      name: input.name,
-      description: input.description,
-      processProfile: input.processProfile,
-      workingScript,
-      createdBy: member.user.id,
-      updatedBy: member.user.id,
-    })
-    .returning();
-  await recordAudit({ teamId: member.team.id, actorId: member.user.id, action: 'design.create', subjectType: 'design', subjectId: design.id });
+  const design = await createDesign({
+    teamId: member.team.id,
+    name: input.name,
+    description: input.description,
+    processProfile: input.processProfile,
+    script: workingScript,
+    userId: member.user.id,
+  });
   return json({ design }, { status: 201, requestId });
 });
