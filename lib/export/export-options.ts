@@ -29,6 +29,7 @@ export interface ExportOptions {
   minimumFeature?: number;
   /** label font bytes (the CLI and the server read fonts/jetbrains-mono-latin-400-normal.woff) */
   font: Uint8Array;
+  /** wrap OASIS cells in CBLOCKs; off by default: the zip deflates the file anyway and CBLOCKs cost ~10x the write time */
   compressOasis?: boolean;
   matrix?: ExposureMatrixRequest;
   phaseMaps?: (name: string) => PhaseMap | undefined;
@@ -58,7 +59,7 @@ export function resolveExportOptions(options: ExportOptions): ResolvedExportOpti
     timeBudgetMs: options.timeBudgetMs ?? 600_000,
     minimumFeature: options.minimumFeature ?? 1,
     font: options.font,
-    compressOasis: options.compressOasis ?? true,
+    compressOasis: options.compressOasis ?? false,
     matrix: options.matrix ?? null,
     phaseMaps: options.phaseMaps,
     onProgress: options.onProgress ?? (() => undefined),

@@ -58,6 +58,17 @@ export class ByteChunks {
     this.length += 8;
   }
 
+  /** Little-endian groups of 7 bits, high bit set on all but the last (OASIS unsigned-integer); value must be a safe integer ≥ 0. */
+  varUint(value: number): void {
+    this.ensure(8);
+    let rest = value;
+    while (rest >= 128) {
+      this.bytes[this.length++] = (rest % 128) + 128;
+      rest = Math.floor(rest / 128);
+    }
+    this.bytes[this.length++] = rest;
+  }
+
   append(data: Uint8Array): void {
     this.ensure(data.length);
     this.bytes.set(data, this.length);

@@ -8,12 +8,7 @@ import { ByteChunks } from '../layout/byte-chunks';
  */
 export function writeUnsigned(out: ByteChunks, value: number): void {
   if (!Number.isSafeInteger(value) || value < 0) throw new Error(`OASIS: ${value} is not an unsigned integer`);
-  let rest = value;
-  while (rest >= 128) {
-    out.u8((rest % 128) + 128);
-    rest = Math.floor(rest / 128);
-  }
-  out.u8(rest);
+  out.varUint(value);
 }
 
 export function writeSigned(out: ByteChunks, value: number): void {
@@ -42,24 +37,28 @@ export function writeString(out: ByteChunks, text: string): void {
   for (let i = 0; i < text.length; i++) out.u8(text.charCodeAt(i) & 0xff);
 }
 
-/** Directions of a g-delta form 1 / 3-delta: east, north, west, south, then the four diagonals. */
-const OCTANT_DIRECTIONS: ReadonlyArray<readonly [number, number]> = [
-  [1, 0], [0, 1], [-1, 0], [0, -1], [1, 1], [-1, 1], [-1, -1], [1, -1],
-];
-
 /**
- * A g-delta: form 1 (one integer, lowest bit 0) for a step along one of the eight octant directions,
+ * A g-delta: form 1 (one integer, lowest bit 0) for a step along one of the eight octant directions
+ * (0 east, 1 north, 2 west, 3 south, 4 north-east, 5 north-west, 6 south-west, 7 south-east),
  * form 2 (lowest bit 1, then the sign of x, then |x|; followed by y as a signed integer) otherwise.
  */
 export function writeGDelta(out: ByteChunks, dx: number, dy: number): void {
-  const magnitude = Math.max(Math.abs(dx), Math.abs(dy));
-  if (magnitude > 0 && (dx === 0 || dy === 0 || Math.abs(dx) === Math.abs(dy))) {
-    const direction = OCTANT_DIRECTIONS.findIndex(([ux, uy]) => ux * magnitude === dx && uy * magnitude === dy);
-    writeUnsigned(out, magnitude * 16 + direction * 2);
+  const direction = octantDirection(dx, dy);
+  if (direction >= 0) {
+    writeUnsigned(out, Math.max(Math.abs(dx), Math.abs(dy)) * 16 + direction * 2);
     return;
   }
   writeUnsigned(out, Math.abs(dx) * 4 + (dx < 0 ? 2 : 0) + 1);
   writeSigned(out, dy);
+}
+
+function octantDirection(dx: number, dy: number): number {
+  if (dx === 0 && dy === 0) return -1;
+  if (dy === 0) return dx > 0 ? 0 : 2;
+  if (dx === 0) return dy > 0 ? 1 : 3;
+  if (dx === dy) return dx > 0 ? 4 : 6;
+  if (dx === -dy) return dx < 0 ? 5 : 7;
+  return -1;
 }
 
 /** The encoding of one value as bytes, for tests and for sizing records. */

@@ -22,7 +22,7 @@ options:
   --date ISO-DATE          date written into the files (default: now), for reproducible bundles
   --matrix-duty LIST       exposure matrix: one column per duty cycle, e.g. 0.4,0.5,0.6
   --matrix-rows LIST       exposure matrix: one row per caption, e.g. "D 90%,D 100%,D 110%"
-  --no-compress            write the OASIS file without CBLOCK compression
+  --cblock                 compress the OASIS cells with CBLOCKs (raw DEFLATE)
 
 Lengths take a unit: nm, um (or µm), mm.`;
 
@@ -55,10 +55,10 @@ const VALUE_FLAGS = new Set(['--out', '--tolerance', '--grid', '--max-vertices',
 export function parseExportArgs(args: string[]): Parsed {
   const values = new Map<string, string>();
   const positional: string[] = [];
-  let compress = true;
+  let compress = false;
   for (let i = 0; i < args.length; i++) {
     const arg = args[i];
-    if (arg === '--no-compress') compress = false;
+    if (arg === '--cblock') compress = true;
     else if (VALUE_FLAGS.has(arg)) {
       const value = args[++i];
       if (value === undefined) throw new UsageError(`${arg} needs a value`);
