@@ -1,0 +1,2 @@
+export { ScriptEditor, ScriptDiffEditor } from './ScriptEditor';
+export type { ScriptEditorProps, ScriptDiffEditorProps } from './types';
