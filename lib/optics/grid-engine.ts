@@ -14,6 +14,9 @@ import type { Illumination, Sampling } from './types';
  * The band limit is that of Matsushima & Shimobaba, Opt. Express 17, 19662 (2009):
  * |f| < 1/(λ·√((2·Δf·z)² + 1)) per axis, which keeps the sampled transfer function free of aliasing.
  */
+/** Axial scans are split into about this many chunks, each propagated with its own band limit. */
+const AXIAL_CHUNKS = 12;
+
 export function createGridEngine(
   mask: MaskModel,
   grid: Grid,
@@ -136,6 +139,53 @@ export function createGridEngine(
     return out;
   };
 
+  function axialChunk(x: number, y: number, z0: number, dz: number, count: number): Float64Array {
+    const { axis, radial2 } = limits(z0 + dz * (count - 1));
+    const ex = phasors(x - centreX(0));
+    const ey = phasors(y - centreY(0));
+    // active spectrum entries: current term P = A·e^{i2π(fx x + fy y)}·e^{i kz z} and step S = e^{i kz dz}
+    let m = 0;
+    const terms = new Int32Array(cells);
+    for (let j = 0; j < n; j++) {
+      if (Math.abs(frequency[j]) >= axis) continue;
+      for (let i = 0; i < n; i++) if (Math.abs(frequency[i]) < axis && frequency[i] ** 2 + frequency[j] ** 2 < radial2) terms[m++] = j * n + i;
+    }
+    const P = new Float64Array(2 * m);
+    const S = new Float64Array(2 * m);
+    for (let q = 0; q < m; q++) {
+      const c = terms[q];
+      const j = Math.floor(c / n);
+      const i = c - j * n;
+      const kz = 2 * Math.PI * Math.sqrt(radial2 - frequency[i] ** 2 - frequency[j] ** 2);
+      const er = ex[2 * i] * ey[2 * j] - ex[2 * i + 1] * ey[2 * j + 1];
+      const ei = ex[2 * i] * ey[2 * j + 1] + ex[2 * i + 1] * ey[2 * j];
+      const ar = spectrum[2 * c] * er - spectrum[2 * c + 1] * ei;
+      const ai = spectrum[2 * c] * ei + spectrum[2 * c + 1] * er;
+      const c0 = Math.cos(kz * z0);
+      const s0 = Math.sin(kz * z0);
+      P[2 * q] = ar * c0 - ai * s0;
+      P[2 * q + 1] = ar * s0 + ai * c0;
+      S[2 * q] = Math.cos(kz * dz);
+      S[2 * q + 1] = Math.sin(kz * dz);
+    }
+    const out = new Float64Array(count);
+    const norm = 1 / cells;
+    for (let step = 0; step < count; step++) {
+      let re = 0;
+      let im = 0;
+      for (let q = 0; q < 2 * m; q += 2) {
+        const pr = P[q];
+        const pi = P[q + 1];
+        re += pr;
+        im += pi;
+        P[q] = pr * S[q] - pi * S[q + 1];
+        P[q + 1] = pr * S[q + 1] + pi * S[q];
+      }
+      out[step] = (re * re + im * im) * norm * norm;
+    }
+    return out;
+  }
+
   return {
     sampling,
     get apertureArea() {
@@ -146,48 +196,11 @@ export function createGridEngine(
     },
     setWavelength,
     axialIntensities(x, y, z0, dz, count) {
-      const { axis, radial2 } = limits(z0 + dz * (count - 1));
-      const ex = phasors(x - centreX(0));
-      const ey = phasors(y - centreY(0));
-      // active spectrum entries: current term P = A·e^{i2π(fx x + fy y)}·e^{i kz z} and step S = e^{i kz dz}
-      let m = 0;
-      const terms = new Int32Array(cells);
-      for (let j = 0; j < n; j++) {
-        if (Math.abs(frequency[j]) >= axis) continue;
-        for (let i = 0; i < n; i++) if (Math.abs(frequency[i]) < axis && frequency[i] ** 2 + frequency[j] ** 2 < radial2) terms[m++] = j * n + i;
-      }
-      const P = new Float64Array(2 * m);
-      const S = new Float64Array(2 * m);
-      for (let q = 0; q < m; q++) {
-        const c = terms[q];
-        const j = Math.floor(c / n);
-        const i = c - j * n;
-        const kz = 2 * Math.PI * Math.sqrt(radial2 - frequency[i] ** 2 - frequency[j] ** 2);
-        const er = ex[2 * i] * ey[2 * j] - ex[2 * i + 1] * ey[2 * j + 1];
-        const ei = ex[2 * i] * ey[2 * j + 1] + ex[2 * i + 1] * ey[2 * j];
-        const ar = spectrum[2 * c] * er - spectrum[2 * c + 1] * ei;
-        const ai = spectrum[2 * c] * ei + spectrum[2 * c + 1] * er;
-        const c0 = Math.cos(kz * z0);
-        const s0 = Math.sin(kz * z0);
-        P[2 * q] = ar * c0 - ai * s0;
-        P[2 * q + 1] = ar * s0 + ai * c0;
-        S[2 * q] = Math.cos(kz * dz);
-        S[2 * q + 1] = Math.sin(kz * dz);
-      }
+      // the band limit narrows with distance: take the scan in chunks, each with the limit of its far end
       const out = new Float64Array(count);
-      const norm = 1 / cells;
-      for (let step = 0; step < count; step++) {
-        let re = 0;
-        let im = 0;
-        for (let q = 0; q < 2 * m; q += 2) {
-          const pr = P[q];
-          const pi = P[q + 1];
-          re += pr;
-          im += pi;
-          P[q] = pr * S[q] - pi * S[q + 1];
-          P[q + 1] = pr * S[q + 1] + pi * S[q];
-        }
-        out[step] = (re * re + im * im) * norm * norm;
+      const chunk = Math.max(8, Math.ceil(count / AXIAL_CHUNKS));
+      for (let start = 0; start < count; start += chunk) {
+        out.set(axialChunk(x, y, z0 + start * dz, dz, Math.min(chunk, count - start)), start);
       }
       return out;
     },
