@@ -397,7 +397,7 @@ export const BUILTINS: readonly Builtin[] = [
   { name: 'y', category: 'coordinate', params: [], returns: 'length', description: 'position on the mask along y', example: 'profile 2 * pi * y / 30 um' },
   { name: 'r', category: 'coordinate', params: [], returns: 'length', description: 'distance from the mask origin', example: 'profile -pi * r^2 / (wavelength * 1 mm)' },
   { name: 'theta', category: 'coordinate', params: [], returns: 'angle', description: 'polar angle around the mask origin, from the x axis', example: 'profile 2 * theta' },
-  { name: 'pi', category: 'constant', params: [], returns: 'dimensionless', description: 'π = 3.14159…', example: 'half = pi rad' },
+  { name: 'pi', category: 'constant', params: [], returns: 'dimensionless', description: 'π = 3.14159…', example: 'half_turn = pi * 1 rad' },
   { name: 'wavelength', category: 'constant', params: [], returns: 'length', description: 'the declared design wavelength', example: 'k = 2 * pi / wavelength' },
 ];
 
