@@ -1,0 +1,2 @@
+export { FocusCheck, type FocusCheckProps } from './FocusCheck';
+export { axialCsv, chromaticCsv, focalMapCsv } from './curves';
