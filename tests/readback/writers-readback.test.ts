@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { writeGdsii } from '@/lib/gdsii';
 import type { LayoutLibrary } from '@/lib/layout/types';
 import { writeOasis } from '@/lib/oasis';
-import { handBuiltLibrary } from '../unit/writers/fixtures';
+import { handBuiltLibrary, transformedPlacementsLibrary } from '../unit/writers/fixtures';
 import { gdspySummary, klayoutCompare, scratchDirectory, writeScratch } from './tools';
 
 // Areas of the hand-built library worked by hand: UNIT holds a 4×2 rectangle (8 µm²), a triangle of base 3 and
@@ -66,6 +66,25 @@ describe('hand-built library read back by gdspy and KLayout', () => {
       ).trim();
       expect(check).toBe('True True 2 1');
     }
+  });
+});
+
+describe('placements with reflection, rotation and every array form', () => {
+  it('gdspy and KLayout expand the same 11 instances from GDSII, and OASIS repetitions match them (empty XOR)', () => {
+    // OASIS repetition types 3 (one column), 9 (one arbitrary vector) and 8 (two arbitrary vectors), and a reflected
+    // and rotated placement, against GDSII SREF/AREF with STRANS and ANGLE
+    const library = transformedPlacementsLibrary();
+    const directory = scratchDirectory();
+    const gds = writeScratch(directory, 'placements.gds', writeGdsii(library));
+    const summary = gdspySummary(gds);
+    expect(summary.layers["1/0"].polygons).toBe(33);
+    expect(summary.layers['1/0'].area).toBeCloseTo(11 * (8 + 3.75 + 10), 9);
+    const comparison = klayoutCompare(gds, writeScratch(directory, 'placements.oas', writeOasis(library)));
+    for (const layer of Object.values(comparison.layers)) {
+      expect(layer.xorEmpty).toBe(true);
+      expect(layer.oasPolygons).toBe(layer.gdsPolygons);
+    }
+    expect(comparison.layers['1/0'].gdsArea).toBeCloseTo(11 * (8 + 3.75 + 10), 9);
   });
 });
 

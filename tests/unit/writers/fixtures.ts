@@ -76,3 +76,28 @@ export function matrixSpec(columns: ExposureMatrixSpec['columns']): ExposureMatr
     drawLabel: boxLabel,
   };
 }
+
+/** The hand-built UNIT cell placed with every transformation and array form the writers have (11 instances, no overlaps). */
+export function transformedPlacementsLibrary(): LayoutLibrary {
+  const base = handBuiltLibrary();
+  const unit = base.cells[0];
+  return {
+    ...base,
+    name: 'PLACEMENTS',
+    cells: [
+      unit,
+      {
+        name: 'TOP',
+        shapes: [],
+        texts: [],
+        placements: [
+          { cell: 'UNIT', x: -50_000, y: 50_000, rotation: 270, mirrorX: true },
+          { cell: 'UNIT', x: 0, y: -100_000, rotation: 180 },
+          { cell: 'UNIT', x: 300_000, y: 0, rows: 3, rowStep: { x: 0, y: 20_000 } },
+          { cell: 'UNIT', x: 400_000, y: 0, columns: 2, columnStep: { x: 40_000, y: 15_000 } },
+          { cell: 'UNIT', x: 500_000, y: -300_000, columns: 2, rows: 2, columnStep: { x: 40_000, y: 5_000 }, rowStep: { x: -5_000, y: 20_000 } },
+        ],
+      },
+    ],
+  };
+}
