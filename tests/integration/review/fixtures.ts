@@ -4,6 +4,7 @@
  * directly (the moves, not the saving, are under test here).
  */
 import { randomUUID } from 'node:crypto';
+import bcrypt from 'bcryptjs';
 import { and, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, capturedMail, designs, memberships, revisions, teams, users } from '@/db/schema';
@@ -19,9 +20,13 @@ export interface TestTeam {
   designId: string;
 }
 
+/** Every fixture account signs in with this password (hashed at low cost: these are throwaway accounts). */
+export const TEST_PASSWORD = 'review-test-password';
+const TEST_PASSWORD_HASH = bcrypt.hashSync(TEST_PASSWORD, 4);
+
 async function person(tag: string, label: string): Promise<Person> {
   const email = `${tag}-${label}@review.test`;
-  const [row] = await db.insert(users).values({ email, name: `${label} ${tag}` }).returning({ id: users.id });
+  const [row] = await db.insert(users).values({ email, name: `${label} ${tag}`, passwordHash: TEST_PASSWORD_HASH }).returning({ id: users.id });
   return { id: row.id, email, name: `${label} ${tag}` };
 }
 
