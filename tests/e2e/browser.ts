@@ -51,13 +51,6 @@ export async function launchBrowser(): Promise<Browser> {
   };
 }
 
-/** A fresh browser context in the same browser, with its own cookies (a second person). */
-export async function newSession(browser: Browser): Promise<Page> {
-  const context = await browser.context.browser()?.newContext({ baseURL: APP_URL });
-  if (!context) throw new Error('persistent contexts cannot open a second session; launch another browser');
-  return context.newPage();
-}
-
 /**
  * Sign in through the real form with e-mail and password (the demo password by default) and wait
  * for the Desk. Leaves the page on /desk.
