@@ -64,7 +64,7 @@ export function RevisionMoves({ revision }: RevisionMovesProps) {
   const label = data?.moves.find((m) => m.move === chosen)?.label;
 
   return (
-    <div className="flex flex-col gap-3" data-testid="revision-moves">
+    <div className="relative flex max-w-md flex-col items-end gap-2" data-testid="revision-moves">
       {choices.isError ? <Notice tone="error">{errorText(choices.error)}</Notice> : null}
       {stale ? (
         <Notice tone="warning" title="This revision changed since the page was loaded">
@@ -80,7 +80,7 @@ export function RevisionMoves({ revision }: RevisionMovesProps) {
             {data.moves.map((m) => (
               <Button
                 key={m.move}
-                tone={FORWARD.has(m.move) ? 'primary' : 'secondary'}
+                tone={FORWARD.has(m.move) && !chosen ? 'primary' : 'secondary'}
                 aria-pressed={chosen === m.move}
                 onClick={() => {
                   setChosen(chosen === m.move ? null : m.move);
@@ -101,7 +101,8 @@ export function RevisionMoves({ revision }: RevisionMovesProps) {
       ) : null}
       {chosen && label && !stale ? (
         <form
-          className="flex flex-col gap-2 rounded border border-hairline bg-paper p-3"
+          aria-label={label}
+          className="absolute right-0 top-10 z-20 flex w-96 flex-col gap-2 rounded border border-hairline bg-paper p-3 shadow-md"
           onSubmit={(event) => {
             event.preventDefault();
             move.mutate(chosen);
