@@ -112,7 +112,7 @@ export function CommentComposer({ reply = false, anchorDraft, pending, error, on
             </label>
           ))}
           {kind === 'line' ? (
-            <input aria-label="Script line" inputMode="numeric" value={line} onChange={(e) => setLine(e.target.value)} className={`${inputClass} w-20`} />
+            <input aria-label="Line number" inputMode="numeric" value={line} onChange={(e) => setLine(e.target.value)} className={`${inputClass} w-20`} />
           ) : null}
           {kind === 'point' ? (
             <span className="inline-flex items-center gap-1">

@@ -118,7 +118,7 @@ describe('review, release and fabrication in the browser', () => {
     await page.goto(`/revisions/${ids.r2}`);
     await page.getByTestId('script-lines').getByRole('button', { name: '11', exact: true }).click();
     const composer = page.getByRole('form', { name: 'New comment' });
-    await expect.poll(() => composer.getByLabel('Script line').inputValue()).toBe('11');
+    await expect.poll(() => composer.getByLabel('Line number').inputValue()).toBe('11');
     await composer.getByRole('textbox', { name: 'Comment' }).fill('Near focus now 900 µm; @fab please check the outer zones after exposure.');
     await composer.getByRole('button', { name: 'Post comment' }).click();
     const comment = page.getByTestId('comment').filter({ hasText: 'please check the outer zones' });
