@@ -1,0 +1,140 @@
+import type { CompiledDesign } from '../design/types';
+import type { LayerInfo } from '../layout/types';
+import { regionPaths, fromPath } from './clip-region';
+import { narrowPlaces } from './narrow-features';
+import type { MaskOptions } from './options';
+import { perimeter, signedArea } from './polygon-math';
+import { regionBox } from './region';
+import type { ManufacturabilityReport, NarrowFeature, ReportWarning } from './report-types';
+import { measureZonesAlongRays } from './zone-rays';
+
+const LISTED = 200;
+
+export interface DrawnLayer {
+  info: LayerInfo;
+  polygons: Float64Array[];
+  /** polygons cut by the aperture or a piece's region (narrow features can only appear there when
+   *  the frequency bound proves the zones themselves wide enough) */
+  clipped: Float64Array[];
+  /** true when the frequency bound cannot prove every zone wider than the minimum feature */
+  checkAll: boolean;
+}
+
+const fmt = (v: number) => (Math.abs(v) >= 100 ? v.toFixed(1) : v.toPrecision(3));
+
+export function buildReport(design: CompiledDesign, options: MaskOptions, layers: DrawnLayer[], centre: { x: number; y: number }): ManufacturabilityReport {
+  const gridUm = options.databaseUnit / 1e-6;
+  const scale = 1 / gridUm;
+  const apertureArea = regionPaths(design.aperture, scale, options.chordTolerance).reduce((s, p) => s + signedArea(fromPath(p)), 0) * gridUm * gridUm;
+  const box = regionBox(design.aperture);
+  const reach = 2 * Math.hypot(box.x1 - box.x0, box.y1 - box.y0);
+  const rays = measureZonesAlongRays(design, centre, reach);
+  const warnings: ReportWarning[] = [];
+  const narrowFeatures: NarrowFeature[] = [];
+  let narrowFeatureCount = 0;
+  let sliverCount = 0;
+  let firstSliver: { x: number; y: number } | null = null;
+  const minSliver = options.minSliverWidth * scale;
+  const summaries = layers.map((layer) => {
+    let vertices = 0;
+    let area = 0;
+    for (const p of layer.polygons) {
+      vertices += p.length / 2;
+      const a = signedArea(p);
+      area += a;
+      if (minSliver > 0 && (2 * a) / perimeter(p) < minSliver) {
+        sliverCount++;
+        firstSliver ??= { x: p[0] * gridUm, y: p[1] * gridUm };
+      }
+    }
+    const candidates = layer.checkAll ? layer.polygons : layer.clipped;
+    let layerNarrow = 0;
+    let first: NarrowFeature | null = null;
+    for (const p of candidates) {
+      for (const place of narrowPlaces(p, options.minimumFeature * scale, options.chordTolerance * scale)) {
+        layerNarrow++;
+        const feature = { layer: layer.info.layer, datatype: layer.info.datatype, x_um: place.x * gridUm, y_um: place.y * gridUm, area_um2: place.area * gridUm * gridUm };
+        first ??= feature;
+        if (narrowFeatures.length < LISTED) narrowFeatures.push(feature);
+      }
+    }
+    narrowFeatureCount += layerNarrow;
+    if (first) {
+      warnings.push({
+        kind: 'narrow-feature',
+        message:
+          `${layerNarrow} place${layerNarrow === 1 ? '' : 's'} on layer ${layer.info.layer}/${layer.info.datatype} ${layerNarrow === 1 ? 'is' : 'are'} narrower than the process minimum of ${fmt(options.minimumFeature)} µm: ` +
+          `shrinking every shape by half the minimum and growing it back loses them, so they may print thinner, break up or vanish. ` +
+          `The first is near (${fmt(first.x_um)}, ${fmt(first.y_um)}) µm.`,
+        x_um: first.x_um,
+        y_um: first.y_um,
+      });
+    }
+    return {
+      layer: layer.info.layer,
+      datatype: layer.info.datatype,
+      name: layer.info.name,
+      polygons: layer.polygons.length,
+      vertices,
+      drawnArea_um2: area * gridUm * gridUm,
+      drawnFraction: apertureArea > 0 ? (area * gridUm * gridUm) / apertureArea : 0,
+    };
+  });
+  if (rays.narrowestZone && rays.narrowestZone.width_um < options.minimumFeature) {
+    warnings.push({
+      kind: 'narrow-zone',
+      message: `The narrowest zone is ${fmt(rays.narrowestZone.width_um)} µm wide near (${fmt(rays.narrowestZone.x_um)}, ${fmt(rays.narrowestZone.y_um)}) µm, below the process minimum of ${fmt(options.minimumFeature)} µm; a smaller aperture, a longer focal length or a finer process avoids it.`,
+      x_um: rays.narrowestZone.x_um,
+      y_um: rays.narrowestZone.y_um,
+    });
+  }
+  if (rays.smallestGap && rays.smallestGap.width_um < options.minimumFeature) {
+    warnings.push({
+      kind: 'narrow-gap',
+      message: `The smallest gap between zones is ${fmt(rays.smallestGap.width_um)} µm near (${fmt(rays.smallestGap.x_um)}, ${fmt(rays.smallestGap.y_um)}) µm, below the process minimum of ${fmt(options.minimumFeature)} µm; neighbouring zones may merge.`,
+      x_um: rays.smallestGap.x_um,
+      y_um: rays.smallestGap.y_um,
+    });
+  }
+  if (sliverCount > 0 && firstSliver) {
+    const at: { x: number; y: number } = firstSliver;
+    warnings.push({
+      kind: 'sliver',
+      message: `${sliverCount} polygon${sliverCount === 1 ? ' is' : 's are'} narrower on average than ${fmt(options.minSliverWidth)} µm (the sliver width); pattern generators may drop or distort them. The first is near (${fmt(at.x)}, ${fmt(at.y)}) µm.`,
+      x_um: at.x,
+      y_um: at.y,
+    });
+  }
+  const edge = regionPaths(design.aperture, scale, options.chordTolerance).flat();
+  const numericalApertures = design.foci.map((f, i) => {
+    let rho = 0;
+    for (const p of edge) rho = Math.max(rho, Math.hypot(p.X * gridUm - f.x, p.Y * gridUm - f.y));
+    return { focus: i, x_um: f.x, y_um: f.y, z_um: f.z, numericalAperture: rho / Math.hypot(rho, f.z) };
+  });
+  const q = design.quantization;
+  const firstFraction = summaries[0]?.drawnFraction ?? 0;
+  const openAreaFraction = q.kind === 'binary' && q.tone === 'negative' ? 1 - firstFraction : firstFraction;
+  const all = layers.flatMap((l) => l.polygons);
+  return {
+    databaseUnit_m: options.databaseUnit,
+    userUnit_m: options.userUnit,
+    chordTolerance_um: options.chordTolerance,
+    maxVertices: options.maxVertices,
+    minimumFeature_um: options.minimumFeature,
+    zoneCount: rays.zoneCount,
+    outermostZone: rays.outermostZone,
+    narrowestZone: rays.narrowestZone,
+    smallestGap: rays.smallestGap,
+    numericalApertures,
+    apertureArea_um2: apertureArea,
+    openAreaFraction,
+    polygonCount: all.length,
+    vertexCount: summaries.reduce((s, l) => s + l.vertices, 0),
+    largestPolygonVertices: all.reduce((m, p) => Math.max(m, p.length / 2), 0),
+    layers: summaries,
+    narrowFeatureCount,
+    narrowFeatures,
+    sliverCount,
+    warnings,
+  };
+}

@@ -1,0 +1,381 @@
+import type { PhaseField } from '../design/types';
+import { depthInDomain, exitAlong, perimeterPosition, type Domain } from './domain';
+import { GeometryError } from './errors';
+import { PointBuffer } from './point-buffer';
+import { refineRoot, scanSegment } from './scan-segment';
+import { buildSeedGrid, matchSeed, type SeedGrid } from './seed-lines';
+
+export interface TraceSettings {
+  /** µm */
+  chordTolerance: number;
+  /** database grid in µm */
+  grid: number;
+  /** µm */
+  seedSpacing: number;
+  anchorX: number;
+  anchorY: number;
+}
+
+/** Closed loops (µm) bounding the drawn side of g inside the domain: drawn side on the left. */
+export type Loop = Float64Array;
+
+interface Chain {
+  points: Float64Array;
+  entry: number;
+  exit: number;
+}
+
+type TraceEnd = { kind: 'closed' } | { kind: 'duplicate' } | { kind: 'exit'; tau: number };
+
+interface SeedRef {
+  horizontal: boolean;
+  line: number;
+  seed: number;
+}
+
+/** Largest turn of the tangent accepted in one step (radians). */
+const MAX_TURN = 0.3;
+/** Accepted change of |∇g| between two vertices; a faster change means a singular point ahead. */
+const GRADIENT_RATIO = 1.67;
+const TURN_SAMPLES = 96;
+
+/**
+ * Follows every zone boundary (g = 0) inside a convex domain and returns the drawn regions as closed
+ * loops: contours wholly inside come back as they are, contours leaving the domain are joined along
+ * the domain's edge. Each step goes along the tangent, is pulled back onto g = 0 by Newton steps, and
+ * is kept only when the chord stays within the chord tolerance of the curve (estimated from the
+ * Newton correction and the tangent's turn), so the cost follows the number of vertices.
+ */
+export function traceTile(g: (x: number, y: number) => number, field: PhaseField, phaseGap: number, domain: Domain, settings: TraceSettings): Loop[] {
+  const tol = settings.chordTolerance;
+  const converged = Math.min(1e-5, tol * 1e-2);
+  const delta = Math.min(1e-4, settings.grid / 10);
+  const minStep = settings.grid / 8;
+  const turnRadius = 4 * minStep;
+  const maxStep = Math.max(minStep * 16, Math.min(settings.seedSpacing, domain.box.x1 - domain.box.x0, domain.box.y1 - domain.box.y0));
+  const seedTolerance = Math.min(1e-4, tol / 10);
+  const seeds: SeedGrid = buildSeedGrid(g, field, phaseGap, domain, settings.seedSpacing, settings.anchorX, settings.anchorY, seedTolerance);
+  const grad = new Float64Array(2);
+
+  const gradient = (x: number, y: number, gv: number): void => {
+    grad[0] = (g(x + delta, y) - gv) / delta;
+    grad[1] = (g(x, y + delta) - gv) / delta;
+  };
+
+  /** Marks the seeds the chord p→q passes; reports closure at the start seed or a duplicate. */
+  const visitChord = (px: number, py: number, qx: number, qy: number, start: SeedRef | null, vertices: number): 'ok' | 'closed' | 'duplicate' => {
+    for (let pass = 0; pass < 2; pass++) {
+      const horizontal = pass === 0;
+      const a = horizontal ? py : px;
+      const b = horizontal ? qy : qx;
+      if (a === b) continue;
+      const base = horizontal ? seeds.horizontalBase : seeds.verticalBase;
+      const first = horizontal ? seeds.horizontalFirst : seeds.verticalFirst;
+      const lines = horizontal ? seeds.horizontal : seeds.vertical;
+      const kLo = Math.ceil((Math.min(a, b) - base) / seeds.spacing);
+      const kHi = Math.floor((Math.max(a, b) - base) / seeds.spacing);
+      for (let k = kLo; k <= kHi; k++) {
+        const line = lines[k - first];
+        if (!line) continue;
+        const c = line.coordinate;
+        if (a < c === b < c) continue;
+        const t = (c - a) / (b - a);
+        const position = horizontal ? px + t * (qx - px) : py + t * (qy - py);
+        const s = matchSeed(line, position);
+        if (s < 0) continue;
+        if (start && start.horizontal === horizontal && start.line === k - first && start.seed === s) {
+          if (vertices >= 3) return 'closed';
+          continue;
+        }
+        if (line.visited[s]) return 'duplicate';
+        line.visited[s] = 1;
+      }
+    }
+    return 'ok';
+  };
+
+  const trace = (x0: number, y0: number, dir: 1 | -1, start: SeedRef | null, out: PointBuffer): TraceEnd => {
+    let px = x0;
+    let py = y0;
+    let gv = g(px, py);
+    gradient(px, py, gv);
+    let gx = grad[0];
+    let gy = grad[1];
+    let gn = Math.sqrt(gx * gx + gy * gy);
+    if (!(gn > 0)) throw new GeometryError(`A zone boundary has no direction at (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+    let tx = (dir * gy) / gn;
+    let ty = (-dir * gx) / gn;
+    out.push(px, py);
+    let L = Math.min(maxStep, 1);
+    let budget = depthInDomain(domain, px, py);
+    let turns = 0;
+    const guard = 200_000_000;
+    for (let iteration = 0; iteration < guard; iteration++) {
+      // Is the domain edge within reach of this step?
+      let exitEdge = -1;
+      let hx = 0;
+      let hy = 0;
+      if (L >= budget) {
+        budget = depthInDomain(domain, px, py);
+        if (L >= budget) {
+          const e = exitAlong(domain, px, py, tx, ty);
+          if (e.distance <= L) {
+            exitEdge = e.edge;
+            hx = px + e.distance * tx;
+            hy = py + e.distance * ty;
+          }
+        }
+      }
+      let qx = px + L * tx;
+      let qy = py + L * ty;
+      let ok = false;
+      let corr = 0;
+      let ratio = 1;
+      let turn = 0;
+      let gqx = 0;
+      let gqy = 0;
+      let gqn = 0;
+      if (exitEdge < 0) {
+        const predictedX = qx;
+        const predictedY = qy;
+        for (let it = 0; it < 8; it++) {
+          gv = g(qx, qy);
+          if (Math.abs(gv) < converged * gn) {
+            ok = true;
+            break;
+          }
+          const s = gv / (gn * gn);
+          qx -= s * gx;
+          qy -= s * gy;
+        }
+        corr = Math.sqrt((qx - predictedX) ** 2 + (qy - predictedY) ** 2);
+        if (ok && depthInDomain(domain, qx, qy) < 0) {
+          // The curve leaves between p and q: finish on the edge the chord crosses.
+          const chord = Math.sqrt((qx - px) ** 2 + (qy - py) ** 2);
+          const e = exitAlong(domain, px, py, (qx - px) / chord, (qy - py) / chord);
+          exitEdge = e.edge;
+          hx = px + (e.distance * (qx - px)) / chord;
+          hy = py + (e.distance * (qy - py)) / chord;
+        }
+      }
+      if (exitEdge >= 0) {
+        const end = finishOnEdge(exitEdge, hx, hy, px, py, gx, gy, gn, tx, ty);
+        if (end) {
+          const status = visitChord(px, py, end.x, end.y, start, out.length);
+          if (status === 'duplicate') return { kind: 'duplicate' };
+          out.push(end.x, end.y);
+          return { kind: 'exit', tau: end.tau };
+        }
+        L *= 0.5;
+        if (L < minStep) throw new GeometryError(`A zone boundary could not be followed to the edge near (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+        continue;
+      }
+      let sag = Infinity;
+      if (ok) {
+        gradient(qx, qy, gv);
+        gqx = grad[0];
+        gqy = grad[1];
+        gqn = Math.sqrt(gqx * gqx + gqy * gqy);
+        ratio = gqn / gn;
+        const nx = (dir * gqy) / gqn;
+        const ny = (-dir * gqx) / gqn;
+        turn = Math.atan2(tx * ny - ty * nx, tx * nx + ty * ny);
+        sag = Math.max(corr / 4, (L * Math.abs(turn)) / 8);
+        const along = (qx - px) * tx + (qy - py) * ty;
+        ok = gqn > 0 && sag <= tol && Math.abs(turn) <= MAX_TURN && along > 0 && ratio < GRADIENT_RATIO && ratio > 1 / GRADIENT_RATIO;
+      }
+      if (!ok) {
+        L *= sag > tol && sag < Infinity && Math.abs(turn) <= MAX_TURN ? Math.min(0.5, Math.max(0.1, 0.9 * Math.sqrt(tol / sag))) : 0.5;
+        if (L < minStep) {
+          // A singular point or a junction of boundaries lies just ahead: continue along the next
+          // boundary met when turning around p towards the drawn side.
+          if (++turns > 100_000) throw new GeometryError(`A zone boundary keeps turning near (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+          const next = turnAround(px, py, tx, ty, dir);
+          const status = visitChord(px, py, next.x, next.y, start, out.length);
+          if (status !== 'ok') return status === 'closed' ? { kind: 'closed' } : { kind: 'duplicate' };
+          budget -= Math.sqrt((next.x - px) ** 2 + (next.y - py) ** 2);
+          px = next.x;
+          py = next.y;
+          out.push(px, py);
+          gv = g(px, py);
+          gradient(px, py, gv);
+          gx = grad[0];
+          gy = grad[1];
+          gn = Math.sqrt(gx * gx + gy * gy);
+          if (!(gn > 0)) throw new GeometryError(`A zone boundary has no direction at (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+          tx = (dir * gy) / gn;
+          ty = (-dir * gx) / gn;
+          L = turnRadius;
+        }
+        continue;
+      }
+      const status = visitChord(px, py, qx, qy, start, out.length);
+      if (status === 'closed') return { kind: 'closed' };
+      if (status === 'duplicate') return { kind: 'duplicate' };
+      out.push(qx, qy);
+      budget -= Math.sqrt((qx - px) ** 2 + (qy - py) ** 2);
+      px = qx;
+      py = qy;
+      gx = gqx;
+      gy = gqy;
+      gn = gqn;
+      tx = (dir * gy) / gn;
+      ty = (-dir * gx) / gn;
+      L = Math.min(maxStep, L * Math.min(2, 0.9 * Math.sqrt(tol / Math.max(sag, tol * 1e-6))));
+    }
+    throw new GeometryError(`A zone boundary did not close near (${x0.toFixed(4)}, ${y0.toFixed(4)}) µm.`);
+  };
+
+  /** Where the boundary meets domain edge e near (hx, hy), if the chord from p to it is within tolerance. */
+  const finishOnEdge = (edge: number, hx: number, hy: number, px: number, py: number, gx: number, gy: number, gn: number, tx: number, ty: number) => {
+    const poly = domain.polygon;
+    const ax = poly[2 * edge];
+    const ay = poly[2 * edge + 1];
+    const bx = poly[(2 * edge + 2) % poly.length];
+    const by = poly[(2 * edge + 3) % poly.length];
+    const ex = bx - ax;
+    const ey = by - ay;
+    const len2 = ex * ex + ey * ey;
+    let u = ((hx - ax) * ex + (hy - ay) * ey) / len2;
+    const rate = gx * ex + gy * ey;
+    if (rate === 0) return null;
+    let done = false;
+    for (let it = 0; it < 12; it++) {
+      const v = g(ax + u * ex, ay + u * ey);
+      if (Math.abs(v) < converged * gn) {
+        done = true;
+        break;
+      }
+      u -= v / rate;
+    }
+    if (!done || u < 0 || u > 1) return null;
+    const x = ax + u * ex;
+    const y = ay + u * ey;
+    if ((x - px) * tx + (y - py) * ty <= 0) return null;
+    const mid = g(0.5 * (px + x), 0.5 * (py + y));
+    if (Math.abs(mid) > tol * gn) return null;
+    return { x, y, tau: perimeterPosition(domain, edge, u) };
+  };
+
+  const turnAround = (px: number, py: number, tx: number, ty: number, dir: 1 | -1) => {
+    const back = Math.atan2(-ty, -tx);
+    const at = (a: number) => g(px + turnRadius * Math.cos(a), py + turnRadius * Math.sin(a));
+    const angle = (k: number) => back - (dir * 2 * Math.PI * k) / TURN_SAMPLES;
+    let k = 1;
+    while (k < TURN_SAMPLES && !(at(angle(k)) > 0)) k++;
+    while (k < TURN_SAMPLES && at(angle(k)) > 0) k++;
+    if (k >= TURN_SAMPLES) throw new GeometryError(`A zone boundary ends at a singular point near (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+    const a = refineRoot((s) => at(angle(s)), k - 1, at(angle(k - 1)), k, at(angle(k)), 1e-6);
+    const o = angle(a);
+    return { x: px + turnRadius * Math.cos(o), y: py + turnRadius * Math.sin(o) };
+  };
+
+  const chains: Chain[] = [];
+  const loops: Loop[] = [];
+  const buffer = new PointBuffer(1024);
+  const backward = new PointBuffer(256);
+
+  // Entries on the domain edge: the boundary enters with the drawn side on its left.
+  const n = domain.polygon.length / 2;
+  for (let e = 0; e < n; e++) {
+    const ax = domain.polygon[2 * e];
+    const ay = domain.polygon[2 * e + 1];
+    const bx = domain.polygon[(2 * e + 2) % domain.polygon.length];
+    const by = domain.polygon[(2 * e + 3) % domain.polygon.length];
+    const found = scanSegment(g, field, phaseGap, ax, ay, bx, by, seedTolerance);
+    for (const u of found.t) {
+      const x = ax + u * (bx - ax);
+      const y = ay + u * (by - ay);
+      gradient(x, y, g(x, y));
+      if (grad[1] * domain.nx[e] - grad[0] * domain.ny[e] <= 0) continue;
+      buffer.length = 0;
+      const end = trace(x, y, 1, null, buffer);
+      if (end.kind === 'exit') chains.push({ points: buffer.toArray(), entry: perimeterPosition(domain, e, u), exit: end.tau });
+      else if (end.kind === 'closed') loops.push(buffer.toArray());
+    }
+  }
+
+  // Interior seeds: closed contours, or pieces of edge-to-edge contours whose entry was not seen.
+  for (const horizontal of [true, false]) {
+    const lines = horizontal ? seeds.horizontal : seeds.vertical;
+    lines.forEach((line, index) => {
+      for (let s = 0; s < line.positions.length; s++) {
+        if (line.visited[s]) continue;
+        line.visited[s] = 1;
+        const x = horizontal ? line.positions[s] : line.coordinate;
+        const y = horizontal ? line.coordinate : line.positions[s];
+        const ref = { horizontal, line: index, seed: s };
+        buffer.length = 0;
+        const end = trace(x, y, 1, ref, buffer);
+        if (end.kind === 'closed') loops.push(buffer.toArray());
+        else if (end.kind === 'exit') {
+          backward.length = 0;
+          const back = trace(x, y, -1, ref, backward);
+          if (back.kind !== 'exit') continue;
+          const points = new Float64Array(2 * (backward.length + buffer.length - 1));
+          for (let i = 0; i < backward.length; i++) {
+            const j = backward.length - 1 - i;
+            points[2 * i] = backward.data[2 * j];
+            points[2 * i + 1] = backward.data[2 * j + 1];
+          }
+          points.set(buffer.data.subarray(2, 2 * buffer.length), 2 * backward.length);
+          chains.push({ points, entry: back.tau, exit: end.tau });
+        }
+      }
+    });
+  }
+
+  loops.push(...assembleChains(chains, domain, g));
+  return loops.filter((l) => l.length >= 6);
+}
+
+/**
+ * Joins edge-to-edge contours into closed loops by walking counter-clockwise along the domain's
+ * edge from each exit to the next entry; a domain with no contour reaching its edge is wholly
+ * drawn or wholly empty.
+ */
+export function assembleChains(chains: Chain[], domain: Domain, g: (x: number, y: number) => number): Loop[] {
+  const poly = domain.polygon;
+  const vertexCount = poly.length / 2;
+  if (chains.length === 0) return g(poly[0], poly[1]) > 0 ? [poly.slice()] : [];
+  const order = chains.map((_, i) => i).sort((a, b) => chains[a].entry - chains[b].entry);
+  const entries = order.map((i) => chains[i].entry);
+  const nextChain = (tau: number): number => {
+    let lo = 0;
+    let hi = entries.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (entries[mid] <= tau) lo = mid + 1;
+      else hi = mid;
+    }
+    return order[lo % entries.length];
+  };
+  const used = new Uint8Array(chains.length);
+  const loops: Loop[] = [];
+  for (let first = 0; first < chains.length; first++) {
+    if (used[first]) continue;
+    const out = new PointBuffer(1024);
+    let current = first;
+    for (;;) {
+      used[current] = 1;
+      const c = chains[current];
+      for (let i = 0; i < c.points.length; i += 2) out.push(c.points[i], c.points[i + 1]);
+      const next = nextChain(c.exit);
+      const from = c.exit;
+      const to = chains[next].entry;
+      const span = (to - from + domain.perimeter) % domain.perimeter;
+      const corners: number[] = [];
+      for (let v = 0; v < vertexCount; v++) {
+        const offset = (domain.cumulative[v] - from + domain.perimeter) % domain.perimeter;
+        if (offset > 0 && offset < span) corners.push(v);
+      }
+      corners.sort((a, b) => ((domain.cumulative[a] - from + domain.perimeter) % domain.perimeter) - ((domain.cumulative[b] - from + domain.perimeter) % domain.perimeter));
+      for (const v of corners) out.push(poly[2 * v], poly[2 * v + 1]);
+      if (next === first) break;
+      if (used[next]) throw new GeometryError('Zone boundaries meeting the edge of a tile could not be joined into closed regions.');
+      current = next;
+    }
+    loops.push(out.toArray());
+  }
+  return loops;
+}

@@ -1,0 +1,118 @@
+import type { CompiledDesign, Region } from '../design/types';
+import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
+import type { MeasuredWidth } from './report-types';
+import { regionSignedDistance } from './region';
+import { refineRoot, safeStep } from './scan-segment';
+
+export interface RayMeasurement {
+  zoneCount: number;
+  outermostZone: MeasuredWidth | null;
+  narrowestZone: MeasuredWidth | null;
+  smallestGap: MeasuredWidth | null;
+}
+
+const RAY_COUNT = 16;
+
+interface Crossing {
+  s: number;
+  /** |cos| of the angle between the ray and the boundary normal: converts ray length to width */
+  cosine: number;
+}
+
+/** Distance from (x, y) along (dx, dy) to where the region ends, found by bisection on the signed distance. */
+function exitDistance(region: Region, x: number, y: number, dx: number, dy: number, reach: number): number {
+  if (regionSignedDistance(region, x, y) <= 0) return 0;
+  let lo = 0;
+  let hi = reach;
+  for (let i = 0; i < 60; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (regionSignedDistance(region, x + mid * dx, y + mid * dy) > 0) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
+ * Zone widths measured along rays from the design's centre. On each ray the drawn state is sampled at
+ * the safe step of scan-segment.ts, every change is refined onto the boundary, and a ray length is
+ * turned into a width across the zone with the boundary normals at both ends.
+ */
+export function measureZonesAlongRays(design: CompiledDesign, centre: { x: number; y: number }, reach: number): RayMeasurement {
+  const spec = layerFunctionSpecs(design.quantization)[0];
+  const pieces = design.pieces.map((p) => ({ region: p.region, field: p.field, g: boundaryFunction(p.field, spec).value }));
+  const pieceAt = (x: number, y: number) => pieces.find((p) => !p.region || regionSignedDistance(p.region, x, y) > 0);
+  const result: RayMeasurement = { zoneCount: 0, outermostZone: null, narrowestZone: null, smallestGap: null };
+  const delta = 1e-4;
+  for (let r = 0; r < RAY_COUNT; r++) {
+    const angle = (2 * Math.PI * r) / RAY_COUNT;
+    const dx = Math.cos(angle);
+    const dy = Math.sin(angle);
+    const end = exitDistance(design.aperture, centre.x, centre.y, dx, dy, reach);
+    if (end <= 0) continue;
+    const drawnAt = (s: number) => {
+      const x = centre.x + s * dx;
+      const y = centre.y + s * dy;
+      const p = pieceAt(x, y);
+      return p ? p.g(x, y) : -1;
+    };
+    const crossings: Crossing[] = [];
+    const chunk = 64;
+    let s0 = 0;
+    let v0 = drawnAt(0);
+    const startsDrawn = v0 > 0;
+    while (s0 < end) {
+      const s1 = Math.min(end, s0 + chunk);
+      const xa = centre.x + s0 * dx;
+      const ya = centre.y + s0 * dy;
+      const xb = centre.x + s1 * dx;
+      const yb = centre.y + s1 * dy;
+      const frequency = Math.max(
+        ...pieces.map((p) => p.field.maxSpatialFrequency(Math.min(xa, xb), Math.min(ya, yb), Math.max(xa, xb), Math.max(ya, yb))),
+      );
+      const h = safeStep(spec.phaseGap, frequency, s1 - s0);
+      const n = Math.max(1, Math.ceil((s1 - s0) / h));
+      for (let i = 1; i <= n; i++) {
+        const s = s0 + ((s1 - s0) * i) / n;
+        const v = drawnAt(s);
+        if (v > 0 !== v0 > 0) {
+          const sc = refineRoot(drawnAt, s - (s1 - s0) / n, v0, s, v, 1e-5);
+          const x = centre.x + sc * dx;
+          const y = centre.y + sc * dy;
+          const p = pieceAt(x, y) ?? pieces[0];
+          const gv = p.g(x, y);
+          const gx = (p.g(x + delta, y) - gv) / delta;
+          const gy = (p.g(x, y + delta) - gv) / delta;
+          const norm = Math.sqrt(gx * gx + gy * gy);
+          crossings.push({ s: sc, cosine: norm > 0 ? Math.abs(gx * dx + gy * dy) / norm : 1 });
+        }
+        v0 = v;
+      }
+      s0 = s1;
+    }
+    // Intervals between consecutive crossings are whole zones (drawn) or gaps (undrawn).
+    let drawn = startsDrawn;
+    const zones: MeasuredWidth[] = [];
+    if (startsDrawn) result.zoneCount += r === 0 ? 1 : 0;
+    for (let i = 0; i + 1 < crossings.length; i++) {
+      drawn = !drawn;
+      const a = crossings[i];
+      const b = crossings[i + 1];
+      const mid = 0.5 * (a.s + b.s);
+      const w: MeasuredWidth = {
+        width_um: (b.s - a.s) * 0.5 * (a.cosine + b.cosine),
+        x_um: centre.x + mid * dx,
+        y_um: centre.y + mid * dy,
+      };
+      if (drawn) {
+        zones.push(w);
+        if (!result.narrowestZone || w.width_um < result.narrowestZone.width_um) result.narrowestZone = w;
+      } else if ((!result.smallestGap || w.width_um < result.smallestGap.width_um)) result.smallestGap = w;
+    }
+    if (r === 0) {
+      // a zone starts at every other crossing (a zone cut by the aperture edge counts too)
+      result.zoneCount += startsDrawn ? Math.floor(crossings.length / 2) : Math.ceil(crossings.length / 2);
+      result.outermostZone = zones.length > 0 ? zones[zones.length - 1] : null;
+    }
+  }
+  return result;
+}
