@@ -30,6 +30,10 @@ trap 'exit 130' INT TERM
 bash scripts/pg.sh start
 node_modules/.bin/tsx scripts/migrate.ts --recreate
 node_modules/.bin/tsx scripts/seed.ts
+if [ -f "$ZW_DATA/run/app.pid" ] && kill -0 "$(cat "$ZW_DATA/run/app.pid")" 2>/dev/null; then
+  zw_say "stopping the app of 'npm run up': the test build replaces .next (run 'npm run up' again afterwards)"
+  zw_stop_app
+fi
 zw_say "building the app (next build)"
 node_modules/.bin/next build >"$ZW_DATA/log/build-test.log" 2>&1 || { tail -n 60 "$ZW_DATA/log/build-test.log" >&2; zw_fail "next build failed (log: .data/log/build-test.log)"; }
 zw_start_services test

@@ -7,6 +7,8 @@ import { db } from '@/db';
 import { capturedMail, mailOutbox, memberships, teams, users } from '@/db/schema';
 import { seedDemo } from '@/db/seed-demo';
 import { sendMail } from '@/lib/mail';
+import { decode } from 'next-auth/jwt';
+import { authSecret } from '@/app/_server/auth/secret';
 import { api, signInCookie } from './helpers';
 
 async function counts() {
@@ -71,6 +73,14 @@ describe('sessions', () => {
     const cookie = await signInCookie('fab@example.com');
     const session = await api('/api/auth/session', { cookie });
     expect(session.body.user.email).toBe('fab@example.com');
+  });
+
+  it('are sealed with the persisted secret alone, so they survive a server restart', async () => {
+    const cookie = await signInCookie('viewer@example.com');
+    const token = cookie.split('; ').find((c) => c.startsWith('next-auth.session-token='))!.split('=').slice(1).join('=');
+    const claims = await decode({ token, secret: authSecret() });
+    const [viewer] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'viewer@example.com'));
+    expect(claims?.sub).toBe(viewer.id);
   });
 
   it('refuse a wrong password', async () => {
