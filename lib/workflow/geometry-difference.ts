@@ -1,0 +1,98 @@
+/**
+ * The geometry difference between two revisions' masks, per layer: areas added and removed (µm²)
+ * from the geometry engine's XOR, and the changed regions as µm polygons for the overlay, cut to
+ * a vertex budget so a change touching every zone still draws quickly (the areas stay complete).
+ */
+import { xorLayers } from '../geometry';
+import type { LayoutLibrary } from '../layout/types';
+import { flatLibrary } from './flat-library';
+
+export interface LayerDifference {
+  layer: number;
+  datatype: number;
+  name: string;
+  /** µm², present in B and not in A */
+  addedArea: number;
+  /** µm², present in A and not in B */
+  removedArea: number;
+  /** µm, flat x,y pairs */
+  added: number[][];
+  removed: number[][];
+  addedPolygons: number;
+  removedPolygons: number;
+}
+
+export interface GeometryDifference {
+  layers: LayerDifference[];
+  /** µm box holding both masks, for framing the overlay */
+  bounds: { x0: number; y0: number; x1: number; y1: number } | null;
+  /** vertices sent for drawing */
+  shownVertices: number;
+  /** true when the vertex budget left some changed polygons out of the overlay */
+  truncated: boolean;
+}
+
+export const OVERLAY_VERTEX_BUDGET = 200_000;
+
+function layerName(a: LayoutLibrary, b: LayoutLibrary, layer: number, datatype: number): string {
+  const info = [...b.layers, ...a.layers].find((l) => l.layer === layer && l.datatype === datatype);
+  return info?.name && !/^\d+\/\d+$/.test(info.name) ? `${info.name} (${layer}/${datatype})` : `${layer}/${datatype}`;
+}
+
+function libraryBounds(libs: LayoutLibrary[]): GeometryDifference['bounds'] {
+  let x0 = Infinity;
+  let y0 = Infinity;
+  let x1 = -Infinity;
+  let y1 = -Infinity;
+  for (const lib of libs) {
+    const um = lib.databaseUnit / 1e-6;
+    for (const cell of lib.cells) {
+      for (const shapes of cell.shapes) {
+        for (const p of shapes.polygons) {
+          for (let i = 0; i < p.length; i += 2) {
+            x0 = Math.min(x0, p[i] * um);
+            x1 = Math.max(x1, p[i] * um);
+            y0 = Math.min(y0, p[i + 1] * um);
+            y1 = Math.max(y1, p[i + 1] * um);
+          }
+        }
+      }
+    }
+  }
+  return Number.isFinite(x0) ? { x0, y0, x1, y1 } : null;
+}
+
+/** A = before, B = after; placements are expanded first so arrayed cells are compared too. */
+export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, vertexBudget = OVERLAY_VERTEX_BUDGET): GeometryDifference {
+  const a = flatLibrary(before);
+  const b = flatLibrary(after);
+  // xorLayers answers on A's grid when the grids differ
+  const um = a.databaseUnit / 1e-6;
+  let budget = vertexBudget;
+  let truncated = false;
+  const toUm = (polygons: Int32Array[]): number[][] => {
+    const out: number[][] = [];
+    for (const p of polygons) {
+      const vertices = p.length / 2;
+      if (vertices > budget) {
+        truncated = true;
+        continue;
+      }
+      budget -= vertices;
+      out.push(Array.from(p, (v) => v * um));
+    }
+    return out;
+  };
+  const layers = xorLayers(a, b).perLayer.map((l) => ({
+    layer: l.layer,
+    datatype: l.datatype,
+    name: layerName(a, b, l.layer, l.datatype),
+    addedArea: l.addedArea,
+    removedArea: l.removedArea,
+    addedPolygons: l.added.length,
+    removedPolygons: l.removed.length,
+    added: toUm(l.added),
+    removed: toUm(l.removed),
+  }));
+  return { layers, bounds: libraryBounds([a, b]), shownVertices: vertexBudget - budget, truncated };
+}
