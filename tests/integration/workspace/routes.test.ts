@@ -159,7 +159,7 @@ describe('POST /api/designs/{id}/phase-maps', () => {
     ['ragged CSV rows', { name: 'ragged', format: 'csv', pitch: '1', phaseScale: '1' }, (): Uint8Array | string => '1,2,3\n4,5\n', 400, /same count/],
     ['a bad name', { name: '9lives', format: 'csv', pitch: '1', phaseScale: '1' }, (): Uint8Array | string => '1\n', 400, /problems/],
     ['a zero pitch', { name: 'flat', format: 'csv', pitch: '0', phaseScale: '1' }, (): Uint8Array | string => '1\n', 400, /problems/],
-    ['a name already used', { name: 'hologram', format: 'csv', pitch: '1', phaseScale: '1' }, (): Uint8Array | string => '1\n', 409, /already has a phase map/],
+    ['a name already used', { name: 'hologram', format: 'csv', pitch: '1', phaseScale: '1' }, (): Uint8Array | string => '1,2\n3,4\n', 409, /already has a phase map/],
   ] as const)('refuses %s with a clear message', async (_what, fields, bytes, status, message) => {
     const response = await request(cookie.designer, url(), { method: 'POST', body: phaseMapForm(fields, { bytes: bytes(), name: 'upload', type: 'application/octet-stream' }) });
     expect(response.status).toBe(status);
