@@ -10,6 +10,13 @@ source "$(dirname "${BASH_SOURCE[0]}")/lib/services.sh"
 source "$ZW_ROOT/scripts/lib/env.sh"
 cd "$ZW_ROOT"
 
+# One test run at a time per checkout: runs share the test database, ports and .next.
+exec 9>"$ZW_DATA/run/test.lock"
+if ! flock -n 9; then
+  zw_say "another npm test is running in this checkout; waiting for it to finish"
+  flock -w 3600 9 || zw_fail "gave up waiting for the other test run"
+fi
+
 zw_apt_need /usr/bin/chromium chromium
 zw_apt_need klayout klayout
 /usr/bin/python3 -c 'import gdspy' 2>/dev/null || zw_apt_install python3-gdspy
