@@ -46,7 +46,7 @@ node_modules/.bin/next build >"$ZW_DATA/log/build-test.log" 2>&1 || { tail -n 60
 zw_start_services test
 
 set +e
-node_modules/.bin/vitest run "$@"
+VITE_CONFIG_NATIVE_IGNORE_WARNING=true node_modules/.bin/vitest run "$@"
 status=$?
 set -e
 [ "$status" -eq 0 ] || zw_say "tests failed; service logs are in .data/log/"

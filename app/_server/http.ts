@@ -49,7 +49,9 @@ export function handle<P = Record<string, never>>(
   fn: (request: NextRequest, context: HandlerContext<P>) => Promise<Response>,
 ): (request: NextRequest, context: { params: Promise<P> }) => Promise<Response> {
   return async (request, context) => {
-    const requestId = request.headers.get('x-request-id')?.slice(0, 64) || randomUUID();
+    // A caller's own id is kept (to follow a request across services) only when it is a plain token.
+    const given = request.headers.get('x-request-id');
+    const requestId = given && /^[A-Za-z0-9_-]{8,64}$/.test(given) ? given : randomUUID();
     try {
       const response = await fn(request, { params: await context.params, requestId });
       if (!response.headers.has('x-request-id')) response.headers.set('x-request-id', requestId);

@@ -90,7 +90,7 @@ export async function requireMember(teamId?: string): Promise<Membership> {
 /** 403 unless `can` allows the action; the message names the action and the role. */
 export function authorize(actor: Actor, action: Action, resource?: Resource): void {
   if (can(actor, action, { localRun: isLocalRun(), ...resource })) return;
-  const who = actor.role ? `a ${actor.role}` : 'someone outside the team';
+  const who = actor.role ? `${/^[aeiou]/.test(actor.role) ? 'an' : 'a'} ${actor.role}` : 'someone outside the team';
   throw new ApiError(403, `As ${who} you may not ${ACTION_LABELS[action]}.`);
 }
 

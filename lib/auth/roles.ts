@@ -15,3 +15,12 @@ export const ROLE_LABELS: Record<TeamRole, string> = {
 export function isTeamRole(value: unknown): value is TeamRole {
   return typeof value === 'string' && (TEAM_ROLES as readonly string[]).includes(value);
 }
+
+/** What each role is for, in a line (the Team page). The rules themselves are in permissions.ts. */
+export const ROLE_DESCRIPTIONS: Record<TeamRole, string> = {
+  owner: 'everything, including invitations and roles',
+  designer: 'creates designs, saves revisions, asks for review',
+  reviewer: 'approves or requests changes on others’ revisions, releases to fab',
+  fab: 'downloads released bundles, records fab runs, marks revisions fabricated',
+  viewer: 'reads everything, changes nothing',
+};

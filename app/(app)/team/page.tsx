@@ -8,18 +8,10 @@ import { RoleSelect } from '@/components/team/RoleSelect';
 import { DateTime, Notice, PageHeader, Panel, Tag } from '@/components/ui';
 import { allows, pageMembership } from '@/app/_server/session';
 import { pendingInvitations } from '@/app/_server/team';
-import { ROLE_LABELS } from '@/lib/auth';
+import { ROLE_DESCRIPTIONS, ROLE_LABELS, TEAM_ROLES } from '@/lib/auth';
 
 export const metadata: Metadata = { title: 'Team' };
 export const dynamic = 'force-dynamic';
-
-const ROLE_SUMMARY = [
-  ['Owner', 'everything, including invitations and roles'],
-  ['Designer', 'creates designs, saves revisions, asks for review'],
-  ['Reviewer', 'approves or requests changes on others’ revisions, releases to fab'],
-  ['Fab', 'downloads released bundles, records fab runs, marks revisions fabricated'],
-  ['Viewer', 'reads everything, changes nothing'],
-] as const;
 
 export default async function TeamPage() {
   const { membership } = await pageMembership('/team');
@@ -106,10 +98,10 @@ export default async function TeamPage() {
       ) : null}
       <Panel title="What each role may do">
         <dl className="grid grid-cols-[8rem_1fr] gap-x-4 gap-y-1">
-          {ROLE_SUMMARY.map(([role, text]) => (
+          {TEAM_ROLES.map((role) => (
             <div key={role} className="contents">
-              <dt className="font-medium">{role}</dt>
-              <dd className="text-ink/80">{text}</dd>
+              <dt className="font-medium">{ROLE_LABELS[role]}</dt>
+              <dd className="text-ink/80">{ROLE_DESCRIPTIONS[role]}</dd>
             </div>
           ))}
         </dl>
