@@ -34,9 +34,29 @@ export interface GeometryDifference {
 
 export const OVERLAY_VERTEX_BUDGET = 200_000;
 
-function layerName(a: LayoutLibrary, b: LayoutLibrary, layer: number, datatype: number): string {
-  const info = [...b.layers, ...a.layers].find((l) => l.layer === layer && l.datatype === datatype);
-  return info?.name && !/^\d+\/\d+$/.test(info.name) ? `${info.name} (${layer}/${datatype})` : `${layer}/${datatype}`;
+export interface DifferenceOptions {
+  /** "layer/datatype" → name, e.g. from the bundles' manifests (a GDSII file carries no layer names) */
+  layerNames?: ReadonlyMap<string, string>;
+  vertexBudget?: number;
+}
+
+function layerName(names: ReadonlyMap<string, string> | undefined, layer: number, datatype: number): string {
+  const key = `${layer}/${datatype}`;
+  const name = names?.get(key);
+  return name ? `${name} (${key})` : key;
+}
+
+/** Layer names from a bundle manifest's layer map, when it has one. */
+export function manifestLayerNames(...manifests: (Record<string, unknown> | null)[]): Map<string, string> {
+  const names = new Map<string, string>();
+  for (const manifest of manifests) {
+    const layers = manifest?.layers;
+    if (!Array.isArray(layers)) continue;
+    for (const l of layers as { layer?: unknown; datatype?: unknown; name?: unknown }[]) {
+      if (typeof l.layer === 'number' && typeof l.datatype === 'number' && typeof l.name === 'string') names.set(`${l.layer}/${l.datatype}`, l.name);
+    }
+  }
+  return names;
 }
 
 function libraryBounds(libs: LayoutLibrary[]): GeometryDifference['bounds'] {
@@ -63,7 +83,8 @@ function libraryBounds(libs: LayoutLibrary[]): GeometryDifference['bounds'] {
 }
 
 /** A = before, B = after; placements are expanded first so arrayed cells are compared too. */
-export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, vertexBudget = OVERLAY_VERTEX_BUDGET): GeometryDifference {
+export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, options: DifferenceOptions = {}): GeometryDifference {
+  const vertexBudget = options.vertexBudget ?? OVERLAY_VERTEX_BUDGET;
   const a = flatLibrary(before);
   const b = flatLibrary(after);
   // xorLayers answers on A's grid when the grids differ
@@ -86,7 +107,7 @@ export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, 
   const layers = xorLayers(a, b).perLayer.map((l) => ({
     layer: l.layer,
     datatype: l.datatype,
-    name: layerName(a, b, l.layer, l.datatype),
+    name: layerName(options.layerNames, l.layer, l.datatype),
     addedArea: l.addedArea,
     removedArea: l.removedArea,
     addedPolygons: l.added.length,

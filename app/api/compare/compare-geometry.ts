@@ -4,7 +4,7 @@ import { REVISION_NOT_FOUND, loadRevisionAccess, refuse, type Outcome } from '@/
 import { getBundle } from '@/db/queries/revisions';
 import { can } from '@/lib/auth/permissions';
 import { BundleReadError, readBundleLayout, type BundleLayout } from '@/lib/workflow/bundle-layout';
-import { geometryDifference, type GeometryDifference } from '@/lib/workflow/geometry-difference';
+import { geometryDifference, manifestLayerNames, type GeometryDifference } from '@/lib/workflow/geometry-difference';
 
 /** The stored bundle of a revision the user may download, or why not. */
 async function releasedLayout(revisionId: string, userId: string): Promise<Outcome<{ layout: BundleLayout; number: number }>> {
@@ -35,7 +35,9 @@ export async function compareRevisionGeometry(a: string, b: string, userId: stri
   let difference = differenceCache.get(key);
   if (!difference) {
     try {
-      difference = geometryDifference(before.layout.library, after.layout.library);
+      difference = geometryDifference(before.layout.library, after.layout.library, {
+        layerNames: manifestLayerNames(before.layout.manifest, after.layout.manifest),
+      });
     } catch (error) {
       return refuse(409, error instanceof Error ? error.message : String(error));
     }

@@ -3,7 +3,7 @@ import JSZip from 'jszip';
 import { writeGdsii } from '@/lib/gdsii';
 import type { LayoutCell, LayoutLibrary } from '@/lib/layout/types';
 import { readBundleLayout } from '@/lib/workflow/bundle-layout';
-import { geometryDifference } from '@/lib/workflow/geometry-difference';
+import { geometryDifference, manifestLayerNames } from '@/lib/workflow/geometry-difference';
 
 // 1 nm database unit: a rectangle from (x0, y0) to (x1, y1) µm as DBU corners.
 const rect = (x0: number, y0: number, x1: number, y1: number) => Int32Array.from([x0, y0, x1, y0, x1, y1, x0, y1].map((v) => v * 1000));
@@ -23,7 +23,7 @@ const cell = (name: string, shapes: LayoutCell['shapes'], placements: LayoutCell
 
 async function bundle(lib: LayoutLibrary): Promise<Uint8Array> {
   const zip = new JSZip();
-  zip.file('manifest.json', JSON.stringify({ design: 'test' }));
+  zip.file('manifest.json', JSON.stringify({ layers: [{ layer: 1, datatype: 0, name: 'zones', purpose: 'zones' }] }));
   zip.file('mask.gds', writeGdsii(lib, { timestamp: new Date(Date.UTC(2026, 0, 1)) }));
   return zip.generateAsync({ type: 'uint8array' });
 }
@@ -43,8 +43,8 @@ describe('geometryDifference', () => {
     const a = await readBundleLayout(await bundle(before));
     const b = await readBundleLayout(await bundle(after));
     expect(a.gdsiiName).toBe('mask.gds');
-    expect(a.manifest).toEqual({ design: 'test' });
-    const d = geometryDifference(a.library, b.library);
+    const d = geometryDifference(a.library, b.library, { layerNames: manifestLayerNames(a.manifest, b.manifest) });
+    expect(d.layers.map((l) => l.name)).toEqual(['zones (1/0)', '2/0']);
     expect(d.layers.map((l) => [l.layer, l.datatype, l.addedArea, l.removedArea])).toEqual([
       [1, 0, 10, 10],
       [2, 0, 9, 0],
@@ -66,7 +66,7 @@ describe('geometryDifference', () => {
   });
 
   it('cuts the overlay to the vertex budget but keeps the areas whole', () => {
-    const d = geometryDifference(before, after, 4);
+    const d = geometryDifference(before, after, { vertexBudget: 4 });
     expect(d.truncated).toBe(true);
     expect(d.shownVertices).toBeLessThanOrEqual(4);
     expect(d.layers[0].addedArea).toBe(10);
