@@ -11,10 +11,10 @@ import type { MultiplexLayout } from './eval/multiplex';
 import { multiplexRegions } from './eval/multiplex';
 import type { Wave } from './eval/phasefield';
 import { fociOf, phaseFieldOf } from './eval/phasefield';
-import { axiconField, cylindricalLensField, gratingField, lensField, paraxialLensField, phaseMapField, vortexField } from './eval/profiles';
+import { axiconField, cylindricalLensField, gratingField, lensField, paraxialLensField, phaseMapField } from './eval/profiles';
 import { regionBox, shiftRegion } from './eval/regions';
 import type { ScalarField, TestField } from './eval/scalar';
-import { COORDINATE_FIELDS, arithmeticField, chooseField, constantField, mergeSymmetry } from './eval/scalar';
+import { COORDINATE_FIELDS, angleField, arithmeticField, chooseField, constantField, mergeSymmetry } from './eval/scalar';
 import { parse } from './parser';
 import { findUnit } from './units';
 
@@ -184,6 +184,7 @@ export function compileProgram(
         return { k: 'text', v: e.value };
       case 'name':
         if (e.name in COORDINATE_FIELDS) return { k: 'field', f: COORDINATE_FIELDS[e.name as keyof typeof COORDINATE_FIELDS] };
+        if (e.name === 'theta') return { k: 'field', f: angleField(0, 0, theWavelength() / (2 * Math.PI)) };
         if (e.name === 'pi') return { k: 'num', v: Math.PI };
         if (e.name === 'wavelength') return { k: 'num', v: theWavelength() };
         return binding(e.name);
@@ -335,7 +336,7 @@ export function compileProgram(
       const [x, y] = c.point('centre');
       const m = c.num('charge');
       if (!Number.isInteger(m) || m === 0) c.fail('charge', 'the charge must be a whole number other than 0');
-      return phase(vortexField(m, x, y));
+      return phase(angleField(x, y, c.lambda() / (2 * Math.PI), m));
     },
     axicon: (c) => {
       const [x, y] = c.point('centre');

@@ -84,19 +84,6 @@ export function gratingField(period: number, direction: number): ScalarField {
   };
 }
 
-/** Spiral phase φ = m·atan2(y − y0, x − x0); |∇φ| = |m|/ρ, unbounded at the centre. */
-export function vortexField(charge: number, cx: number, cy: number): ScalarField {
-  return {
-    at: (x, y) => charge * Math.atan2(y - cy, x - cx),
-    bound: (box) => {
-      const m = Math.abs(charge);
-      return { lo: -Math.PI * m, hi: Math.PI * m, slope: m / radialRange(box, cx, cy)[0] };
-    },
-    symmetry: NONE,
-    focus: null,
-  };
-}
-
 /** Axicon φ = −2πρ/Λ; |∇φ| = 2π/Λ. */
 export function axiconField(period: number, cx: number, cy: number): ScalarField {
   const k = TWO_PI / period;

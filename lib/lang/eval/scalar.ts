@@ -17,6 +17,8 @@ export interface ScalarField {
   bound: (box: Box) => Bound;
   symmetry: Symmetry;
   focus: FocusInfo | null;
+  /** set for a spiral phase: added to a lens centred here, it keeps the lens's focal point */
+  neutralAbout?: { x: number; y: number };
 }
 
 /** A position-dependent condition (for `if`). */
@@ -40,7 +42,7 @@ export function constantField(v: number): ScalarField {
   return { at: () => v, bound: () => bound, symmetry: ANY, focus: null };
 }
 
-export const COORDINATE_FIELDS: Record<'x' | 'y' | 'r' | 'theta', ScalarField> = {
+export const COORDINATE_FIELDS: Record<'x' | 'y' | 'r', ScalarField> = {
   x: { at: (x) => x, bound: (b) => ({ lo: b.x0, hi: b.x1, slope: 1 }), symmetry: NONE, focus: null },
   y: { at: (_x, y) => y, bound: (b) => ({ lo: b.y0, hi: b.y1, slope: 1 }), symmetry: NONE, focus: null },
   r: {
@@ -52,14 +54,23 @@ export const COORDINATE_FIELDS: Record<'x' | 'y' | 'r' | 'theta', ScalarField> =
     symmetry: { kind: 'about', x: 0, y: 0 },
     focus: null,
   },
-  theta: {
-    at: (x, y) => Math.atan2(y, x),
-    // |∇θ| = 1/ρ, unbounded in a box that holds the origin
-    bound: (b) => ({ lo: -Math.PI, hi: Math.PI, slope: 1 / radialRange(b, 0, 0)[0] }),
+};
+
+/**
+ * The polar angle about (cx, cy). |∇θ| = 1/ρ has no bound at the centre; the bound uses
+ * ρ ≥ `core`. The compiler passes core = λ/(2π): inside it a charge-m spiral has spokes finer than
+ * λ/m, which deflect light past 90° (no propagating wave) and lie below lithographic resolution.
+ */
+export function angleField(cx: number, cy: number, core: number, charge = 1): ScalarField {
+  const m = Math.abs(charge);
+  return {
+    at: (x, y) => charge * Math.atan2(y - cy, x - cx),
+    bound: (b) => ({ lo: -Math.PI * m, hi: Math.PI * m, slope: m / Math.max(radialRange(b, cx, cy)[0], core) }),
     symmetry: NONE,
     focus: null,
-  },
-};
+    neutralAbout: { x: cx, y: cy },
+  };
+}
 
 type Op2 = '+' | '-' | '*' | '/';
 
@@ -100,8 +111,11 @@ export function arithmeticField(op: Op2, left: ScalarField | number, right: Scal
   } else {
     at = op === '+' ? (x, y) => fa(x, y) + fb(x, y) : op === '-' ? (x, y) => fa(x, y) - fb(x, y) : op === '*' ? (x, y) => fa(x, y) * fb(x, y) : (x, y) => fa(x, y) / fb(x, y);
   }
-  // a lens plus a constant phase still focuses to the same point
-  const focus = typeof right === 'number' && (op === '+' || op === '-') ? a.focus : typeof left === 'number' && op === '+' ? b.focus : null;
+  // a lens plus a constant phase, or plus a spiral about its axis, still focuses to the same point
+  const keeps = (lens: ScalarField, other: ScalarField | number): boolean =>
+    typeof other === 'number' || (other.neutralAbout !== undefined && lens.focus !== null && other.neutralAbout.x === lens.focus.x && other.neutralAbout.y === lens.focus.y);
+  const additive = op === '+' || op === '-';
+  const focus = additive && a.focus && keeps(a, right) ? a.focus : op === '+' && b.focus && keeps(b, left) ? b.focus : null;
   return { at, bound, symmetry, focus };
 }
 

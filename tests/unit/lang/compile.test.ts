@@ -64,6 +64,16 @@ describe('symmetry centre', () => {
   });
 });
 
+describe('designed foci', () => {
+  it('survive a constant phase or a spiral about the lens axis, not a tilt', () => {
+    const foci = (profile: string) => compiled(script(profile)).foci;
+    expect(foci('lens(focal: 1.5 mm) + vortex(charge: 2)')).toEqual([{ x: 0, y: 0, z: 1500, weight: 1 }]);
+    expect(foci('vortex(charge: 1, centre: (5 um, 0 um)) + lens(focal: 1 mm, centre: (5 um, 0 um)) - 0.25 waves')).toEqual([{ x: 5, y: 0, z: 1000, weight: 1 }]);
+    expect(foci('lens(focal: 1 mm) + vortex(charge: 1, centre: (5 um, 0 um))')).toEqual([]);
+    expect(foci('lens(focal: 1 mm) + grating(period: 30 um)')).toEqual([]);
+  });
+});
+
 describe('regions, quantization and labels', () => {
   it('builds apertures from shapes and set operations', () => {
     const design = compiled(script('lens(focal: 1 mm)', 'hole = circle(radius: 20 um)', 'difference(shift(rectangle(width: 200 um, height: 100 um), by: (10 um, 0 um)), hole)'));

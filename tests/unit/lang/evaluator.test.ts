@@ -100,6 +100,13 @@ describe('vortex and combinations', () => {
     expect(total).toBeCloseTo(6 * Math.PI, 9);
   });
 
+  it('bounds a spiral by |m|/ρ, capped at |m|/λ inside the core of radius λ/(2π)', () => {
+    const field = compiled(script('vortex(charge: -2)')).pieces[0].field;
+    expect(field.maxSpatialFrequency(-5, -5, 5, 5)).toBeCloseTo(2 / LAMBDA, 12);
+    expect(field.maxSpatialFrequency(10, 0, 20, 0)).toBeCloseTo(2 / (2 * Math.PI * 10), 12);
+    expect(compiled(script('3 * theta')).pieces[0].field.maxSpatialFrequency(-1, -1, 1, 1)).toBeCloseTo(3 / LAMBDA, 12);
+  });
+
   it('a combination is the complex sum Σ w·exp(i(φ + c)) and its phase is the argument', () => {
     const design = compiled(script('superpose(wave(lens(focal: 800 um, centre: (-40 um, 0 um)), weight: 0.6, offset: 0.25 waves), wave(lens(focal: 1.2 mm), weight: 0.4))'));
     const one = compiled(script('lens(focal: 800 um, centre: (-40 um, 0 um))')).pieces[0].field;
@@ -163,6 +170,8 @@ describe('maxSpatialFrequency never under-estimates', () => {
         const h = 1e-4;
         const x = x0 + h + u * (size - 2 * h);
         const y = y0 + h + v * (size - 2 * h);
+        // inside the core λ/(2π) of a phase singularity the bound is capped by rule (see DEVELOPERS.md)
+        if (Math.hypot(x, y) < LAMBDA / (2 * Math.PI)) return;
         let gx = (field.phase(x + h, y) - field.phase(x - h, y)) / (2 * h);
         let gy = (field.phase(x, y + h) - field.phase(x, y - h)) / (2 * h);
         // steps across a wrap, a branch cut or an `if` boundary are edges, not frequency
