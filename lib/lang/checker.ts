@@ -420,7 +420,7 @@ function literalValue(e: Expr): number | undefined {
   return undefined;
 }
 
-export function describeParam(type: ParamType): string {
+function describeParam(type: ParamType): string {
   const words: Record<ParamType, string> = {
     length: 'a length',
     angle: 'an angle',
