@@ -98,7 +98,7 @@ export function setUpMonaco(): typeof monaco {
   });
 
   monaco.languages.registerCompletionItemProvider(LANGUAGE_ID, {
-    triggerCharacters: ['(', ',', ' '],
+    triggerCharacters: ['(', ','],
     provideCompletionItems(model, position) {
       const word = model.getWordUntilPosition(position);
       const range = new monaco.Range(position.lineNumber, word.startColumn, position.lineNumber, word.endColumn);
