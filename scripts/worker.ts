@@ -12,7 +12,7 @@ import { threadedExporter } from '@/lib/jobs/threaded-exporter';
 import { workExportQueues } from '@/lib/jobs/work-queues';
 
 /** Wall-clock budget of one export; beyond it the export thread is stopped and the revision fails. */
-const EXPORT_BUDGET_MS = Math.min(Number(process.env.ZW_EXPORT_BUDGET_MS ?? 120_000), (EXPORT_EXPIRE_SECONDS - 10) * 1000);
+const EXPORT_BUDGET_MS = Math.min(Number(process.env.ZW_EXPORT_BUDGET_MS ?? 240_000), (EXPORT_EXPIRE_SECONDS - 10) * 1000);
 
 async function main(): Promise<void> {
   const boss = await getBoss(databaseUrl(), { worker: true });

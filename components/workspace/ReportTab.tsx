@@ -4,11 +4,11 @@ import { formatLength } from '@/components/mask-view/viewport';
 import { Notice } from '@/components/ui';
 import type { ProcessProfile } from '@/lib/schemas/designs';
 import { Figure } from './MaskTab';
-import type { Preview } from './usePreview';
+import type { PreviewState } from './usePreview';
 
 /** Manufacturability numbers and warnings of the working script, against the process profile. */
-export function ReportTab({ preview, profile }: { preview: Preview; profile: ProcessProfile }) {
-  const report = preview.data?.report;
+export function ReportTab({ preview, profile }: { preview: PreviewState; profile: ProcessProfile }) {
+  const report = preview.figures;
   if (!report) return <p className="text-ink/70">The report appears once the script draws a mask.</p>;
   const margin = report.narrowest ? report.narrowest.width / profile.minimumFeature : null;
   return (
@@ -20,6 +20,7 @@ export function ReportTab({ preview, profile }: { preview: Preview; profile: Pro
         <Figure label="Process minimum feature" value={formatLength(profile.minimumFeature)} />
         <Figure label="Narrowest ÷ minimum" value={margin === null ? '—' : `${margin.toFixed(2)} ×`} warn={margin !== null && margin < 1} />
         <Figure label="Features below the minimum" value={String(report.belowMinimum)} warn={report.belowMinimum > 0} />
+        <Figure label="Open area" value={`${(report.openAreaFraction * 100).toFixed(1)} %`} />
         <Figure label="Polygons / vertices" value={`${report.polygonCount.toLocaleString('en')} / ${report.vertexCount.toLocaleString('en')}`} />
       </dl>
       {report.warnings.length === 0 ? (

@@ -2,22 +2,24 @@
 
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { MaskView, type MaskPin } from '@/components/mask-view';
-import { unpackLibrary } from '@/components/mask-view/packing';
 import { formatLength } from '@/components/mask-view/viewport';
 import { CommentThread, RevisionMoves } from '@/components/review';
 import { DateTime, Notice, Panel, Tag, buttonClass } from '@/components/ui';
 import type { CommentAnchor } from '@/lib/schemas/comments';
 import type { ProcessProfile } from '@/lib/schemas/designs';
 import { STATE_LABELS, isRevisionState } from '@/lib/workflow/states';
-import { callApi, sendJson } from './api';
+import { callApi } from './api';
 import { BuildProgress } from './BuildProgress';
 import { formatBytes } from './history';
-import type { PreviewResponse } from './preview-types';
 import { ScriptLines } from './ScriptLines';
-import type { RevisionRow } from './types';
+import type { PhaseMapRow, RevisionRow } from './types';
+import { usePhaseMapData } from './usePhaseMapData';
+import { usePreview } from './usePreview';
+
+const NO_MAPS: PhaseMapRow[] = [];
 
 export interface RevisionViewProps {
   revision: RevisionRow & { source: string; processProfile: ProcessProfile };
@@ -34,14 +36,17 @@ export function RevisionView({ revision, designId, designName, teamName, canRetr
   const [anchor, setAnchor] = useState<CommentAnchor | null>(null);
   const [highlight, setHighlight] = useState<number | null>(null);
   const [retryError, setRetryError] = useState<string | null>(null);
-  const mask = useQuery({
-    queryKey: ['revision-mask', revision.id],
-    queryFn: () =>
-      callApi<PreviewResponse>(`/api/designs/${designId}/preview`, sendJson('POST', { script: revision.source, processProfile: revision.processProfile })),
+  const mapRows = useQuery({
+    queryKey: ['phase-maps', designId],
+    queryFn: async () => (await callApi<{ maps: PhaseMapRow[] }>(`/api/designs/${designId}/phase-maps`)).maps,
     staleTime: Infinity,
-    retry: false,
   });
-  const library = useMemo(() => (mask.data?.library ? unpackLibrary(mask.data.library) : null), [mask.data?.library]);
+  const mapData = usePhaseMapData(designId, mapRows.data ?? NO_MAPS);
+  const profile = revision.processProfile;
+  const mask = usePreview(
+    { script: revision.source, databaseUnit: profile.databaseUnit, minimumFeature: profile.minimumFeature, chordTolerance: profile.chordTolerance },
+    mapData,
+  );
   const pins: MaskPin[] = anchor && 'x_um' in anchor ? [{ x: anchor.x_um, y: anchor.y_um, label: '•' }] : [];
   const state = isRevisionState(revision.state) ? STATE_LABELS[revision.state] : revision.state;
 
@@ -133,14 +138,14 @@ export function RevisionView({ revision, designId, designName, teamName, canRetr
           <p className="mt-2 text-xs text-ink/60">Click a line number to comment on that line.</p>
         </Panel>
         <Panel title="Mask">
-          {mask.error ? <Notice tone="error">{mask.error.message}</Notice> : null}
+          {mask.message ? <Notice tone="warning">{mask.message}</Notice> : null}
           <MaskView
-            library={library}
-            markers={mask.data?.report.narrowest ? [mask.data.report.narrowest] : []}
+            library={mask.library}
+            markers={mask.figures?.narrowest ? [mask.figures.narrowest] : []}
             pins={pins}
             onPickPoint={(p) => setAnchor({ x_um: p.x, y_um: p.y })}
             height={420}
-            emptyText={mask.isFetching ? 'Drawing the mask…' : 'No mask to show.'}
+            emptyText={mask.busy ? 'Drawing the mask…' : 'No mask to show.'}
           />
         </Panel>
       </div>

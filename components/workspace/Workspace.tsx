@@ -16,6 +16,7 @@ import { FocusTab } from './FocusTab';
 import { Tabs } from './Tabs';
 import { useDraft, type DraftState } from './useDraft';
 import { usePreview } from './usePreview';
+import { usePhaseMapData } from './usePhaseMapData';
 import type { PhaseMapRow, RevisionRow, WorkspaceDesign } from './types';
 
 type TabId = 'mask' | 'focus' | 'report' | 'history';
@@ -57,7 +58,11 @@ export function Workspace({ design, revisions: initialRevisions, phaseMaps: init
   const [tracking, setTracking] = useState<string | null>(
     () => initialRevisions.find((r) => r.buildStatus === 'queued' || r.buildStatus === 'running')?.id ?? null,
   );
-  const preview = usePreview(design.id, draft.script, profile);
+  const mapData = usePhaseMapData(design.id, phaseMaps);
+  const preview = usePreview(
+    { script: draft.script, databaseUnit: profile.databaseUnit, minimumFeature: profile.minimumFeature, chordTolerance: profile.chordTolerance },
+    mapData,
+  );
 
   const problems = diagnostics.filter((d) => d.severity === 'error');
   const warnings = diagnostics.filter((d) => d.severity === 'warning');
@@ -105,9 +110,9 @@ export function Workspace({ design, revisions: initialRevisions, phaseMaps: init
   return (
     <div className="flex flex-col gap-4" data-testid="workspace">
       <div className="flex flex-wrap items-center gap-3 border-b border-hairline pb-3">
-        <div className="mr-auto">
-          <h1 className="text-lg font-semibold">{design.name}</h1>
-          <p className="text-xs text-ink/60">
+        <div className="mr-auto min-w-0 max-w-xl">
+          <h1 className="truncate text-lg font-semibold">{design.name}</h1>
+          <p className="truncate text-xs text-ink/60" title={design.description}>
             {design.teamName}
             {design.description ? ` · ${design.description}` : ''}
           </p>
@@ -139,7 +144,13 @@ export function Workspace({ design, revisions: initialRevisions, phaseMaps: init
               onChange={(e) => setMessage(e.target.value)}
               className="w-72"
             />
-            <Button tone="primary" type="submit" disabled={saving || problems.length > 0 || message.trim() === ''}>
+            <Button
+              tone="primary"
+              type="submit"
+              className="whitespace-nowrap"
+              disabled={saving || problems.length > 0 || message.trim() === ''}
+              title={problems.length > 0 ? 'Fix the script problems first' : message.trim() === '' ? 'Write a message first' : undefined}
+            >
               {saving ? 'Saving…' : 'Save revision'}
             </Button>
           </form>
@@ -189,7 +200,7 @@ export function Workspace({ design, revisions: initialRevisions, phaseMaps: init
             tabs={[
               { id: 'mask', label: 'Mask' },
               { id: 'focus', label: 'Focus check' },
-              { id: 'report', label: 'Report', badge: preview.data && preview.data.report.warnings.length > 0 ? <WarningBadge n={preview.data.report.warnings.length} /> : undefined },
+              { id: 'report', label: 'Report', badge: preview.figures && preview.figures.warnings.length > 0 ? <WarningBadge n={preview.figures.warnings.length} /> : undefined },
               { id: 'history', label: 'History', badge: <span className="numeric text-xs text-ink/60">{revisions.length}</span> },
             ]}
             panels={{

@@ -1,25 +1,21 @@
-import type { PackedLibrary } from '@/components/mask-view/packing';
+import type { LayoutLibrary } from '@/lib/layout/types';
+import type { MaskFigures } from '@/lib/jobs/mask-figures';
+import type { PhaseMapRecord } from '@/lib/jobs/export-job';
 
-/** Manufacturability numbers of a mask, from the geometry report. Lengths in µm. */
-export interface MaskFigures {
-  zoneCount: number | null;
-  polygonCount: number;
-  vertexCount: number;
-  /** the narrowest line or space found, where it is */
-  narrowest: { width: number; x: number; y: number } | null;
+export type { MaskFigures };
+
+/** What the page asks the preview worker to draw. */
+export interface PreviewRequest {
+  id: number;
+  script: string;
+  /** µm */
+  databaseUnit: number;
   minimumFeature: number;
-  /** features narrower than the process minimum */
-  belowMinimum: number;
-  warnings: string[];
+  chordTolerance: number;
+  phaseMaps: PhaseMapRecord[];
 }
 
-/** What the preview route answers: the mask at a coarse chord tolerance, with its figures. */
-export interface PreviewResponse {
-  library: PackedLibrary | null;
-  report: MaskFigures;
-  /** the chord tolerance the preview was drawn with (coarser than the bundle's), µm */
-  chordTolerance: number;
-  elapsedMs: number;
-  /** the preview's own message when it could not draw (script problems, over budget) */
-  message: string | null;
-}
+/** The mask at the preview's chord tolerance with its figures, or the reason there is none. */
+export type PreviewResult =
+  | { id: number; ok: true; library: LayoutLibrary; figures: MaskFigures; chordTolerance: number; elapsedMs: number }
+  | { id: number; ok: false; message: string };

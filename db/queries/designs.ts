@@ -250,3 +250,12 @@ export async function insertPhaseMap(input: {
     return { ok: true as const, id: inserted[0].id };
   });
 }
+
+/** One phase map's file, if it belongs to the design. */
+export async function getPhaseMapData(designId: string, phaseMapId: string): Promise<{ format: 'png16' | 'csv'; data: Buffer } | null> {
+  const [row] = await db
+    .select({ format: phaseMaps.format, data: phaseMaps.data })
+    .from(phaseMaps)
+    .where(and(eq(phaseMaps.id, phaseMapId), eq(phaseMaps.designId, designId)));
+  return row ?? null;
+}

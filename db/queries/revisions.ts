@@ -196,10 +196,26 @@ export const exportStore: ExportStore = {
         buildError: null,
       })
       .where(and(eq(revisions.id, revisionId), inArray(revisions.buildStatus, ['queued', 'running'] satisfies BuildStatus[])))
-      .returning({ source: revisions.source, processProfile: revisions.processProfile, designId: revisions.designId });
+      .returning({
+        source: revisions.source,
+        processProfile: revisions.processProfile,
+        designId: revisions.designId,
+        number: revisions.number,
+        createdAt: revisions.createdAt,
+      });
     const row = rows[0];
     if (!row) return null;
-    return { source: row.source, processProfile: row.processProfile, phaseMaps: await loadPhaseMaps(row.designId) };
+    const [design] = await db.select({ name: designs.name }).from(designs).where(eq(designs.id, row.designId));
+    return {
+      source: row.source,
+      processProfile: row.processProfile,
+      designId: row.designId,
+      designName: design?.name ?? 'design',
+      revisionId,
+      revisionNumber: row.number,
+      savedAt: row.createdAt.toISOString(),
+      phaseMaps: await loadPhaseMaps(row.designId),
+    };
   },
 
   async progress(revisionId, fraction, stage) {

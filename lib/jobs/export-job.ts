@@ -7,6 +7,12 @@
 /** What the exporter needs from the revision. */
 export interface ExportInput {
   source: string;
+  designId: string;
+  designName: string;
+  revisionId: string;
+  revisionNumber: number;
+  /** ISO time the revision was saved; dates the bundle's files so a re-export is byte-identical */
+  savedAt: string;
   processProfile: Record<string, unknown>;
   /** name → raw uploaded file with its parameters; the exporter parses what the script uses */
   phaseMaps: PhaseMapRecord[];
