@@ -11,59 +11,82 @@ export interface Grid {
 
 const SUB_ROWS = 8;
 
-interface Edge {
-  id: number;
-  xa: number;
-  ya: number;
-  xb: number;
-  yb: number;
-}
-
 /**
- * A scanner over the grid's scan lines (SUB_ROWS per pixel row, taken in increasing order): each call
- * returns that line's inside spans of the union of the polygons (each even-odd filled), sorted and merged.
+ * Sweeps the grid's scan lines (SUB_ROWS per pixel row). On each line every polygon is even-odd filled
+ * on its own and the polygons of a layer are united; `visit` receives each run [x0, x1) of constant
+ * state, the state's bit k set where layer k is drawn (runs with no layer drawn are skipped).
  */
-function spanScanner(polygons: Float64Array[], grid: Grid): (line: number) => Array<[number, number]> {
-  const edges: Edge[] = [];
-  polygons.forEach((p, id) => {
-    for (let i = 0, j = p.length - 2; i < p.length; j = i, i += 2) {
-      const [xa, ya, xb, yb] = p[i + 1] < p[j + 1] ? [p[i], p[i + 1], p[j], p[j + 1]] : [p[j], p[j + 1], p[i], p[i + 1]];
-      if (ya !== yb) edges.push({ id, xa, ya, xb, yb });
+function sweepStates(layers: Float64Array[][], grid: Grid, visit: (row: number, x0: number, x1: number, state: number) => void): void {
+  const xa: number[] = [];
+  const ya: number[] = [];
+  const xb: number[] = [];
+  const yb: number[] = [];
+  const polygonOf: number[] = [];
+  const layerOfPolygon: number[] = [];
+  layers.forEach((polygons, layer) => {
+    for (const p of polygons) {
+      const id = layerOfPolygon.length;
+      layerOfPolygon.push(layer);
+      for (let i = 0, j = p.length - 2; i < p.length; j = i, i += 2) {
+        if (p[i + 1] === p[j + 1]) continue;
+        const low = p[i + 1] < p[j + 1] ? i : j;
+        const high = low === i ? j : i;
+        xa.push(p[low]);
+        ya.push(p[low + 1]);
+        xb.push(p[high]);
+        yb.push(p[high + 1]);
+        polygonOf.push(id);
+      }
     }
   });
-  edges.sort((a, b) => a.ya - b.ya);
+  const order = Array.from(ya.keys()).sort((a, b) => ya[a] - ya[b]);
+  const parity = new Uint8Array(layerOfPolygon.length);
+  const inside = new Int32Array(layers.length);
+  // active edges kept in x order from line to line: the order barely changes, so insertion sort is near linear
+  let active: number[] = [];
+  let xs: number[] = [];
   let next = 0;
-  let active: Edge[] = [];
-  const crossings: Array<{ id: number; x: number }> = [];
-  return (line) => {
+  for (let line = 0; line < grid.n * SUB_ROWS; line++) {
+    const row = Math.floor(line / SUB_ROWS);
     const y = grid.y0 + ((line + 0.5) / SUB_ROWS) * grid.pitch;
-    while (next < edges.length && edges[next].ya <= y) active.push(edges[next++]);
-    active = active.filter((e) => e.yb > y);
-    crossings.length = 0;
-    for (const e of active) crossings.push({ id: e.id, x: e.xa + ((y - e.ya) * (e.xb - e.xa)) / (e.yb - e.ya) });
-    crossings.sort((a, b) => a.id - b.id || a.x - b.x);
-    const raw: Array<[number, number]> = [];
-    for (let i = 0; i + 1 < crossings.length; i += 2) raw.push([crossings[i].x, crossings[i + 1].x]);
-    raw.sort((a, b) => a[0] - b[0]);
-    const spans: Array<[number, number]> = [];
-    for (const [s, e] of raw) {
-      const last = spans[spans.length - 1];
-      if (last && s <= last[1]) last[1] = Math.max(last[1], e);
-      else spans.push([s, e]);
+    const kept: number[] = [];
+    for (const e of active) if (yb[e] > y) kept.push(e);
+    while (next < order.length && ya[order[next]] <= y) {
+      const e = order[next++];
+      if (yb[e] > y) kept.push(e);
     }
-    return spans;
-  };
+    active = kept;
+    xs = active.map((e) => xa[e] + ((y - ya[e]) * (xb[e] - xa[e])) / (yb[e] - ya[e]));
+    for (let i = 1; i < active.length; i++) {
+      const x = xs[i];
+      const e = active[i];
+      let j = i - 1;
+      while (j >= 0 && xs[j] > x) {
+        xs[j + 1] = xs[j];
+        active[j + 1] = active[j];
+        j--;
+      }
+      xs[j + 1] = x;
+      active[j + 1] = e;
+    }
+    let state = 0;
+    let from = 0;
+    for (let c = 0; c < active.length; c++) {
+      const x = xs[c];
+      if (state !== 0 && x > from) visit(row, from, x, state);
+      const id = polygonOf[active[c]];
+      const layer = layerOfPolygon[id];
+      parity[id] ^= 1;
+      inside[layer] += parity[id] ? 1 : -1;
+      state = inside[layer] > 0 ? state | (1 << layer) : state & ~(1 << layer);
+      from = x;
+    }
+  }
 }
 
 /** Fraction of every pixel covered by the union of the polygons, antialiased. Row-major n×n. */
 export function polygonCoverage(polygons: Float64Array[], grid: Grid): Float32Array {
-  const coverage = new Float32Array(grid.n * grid.n);
-  const scan = spanScanner(polygons, grid);
-  for (let line = 0; line < grid.n * SUB_ROWS; line++) {
-    const row = Math.floor(line / SUB_ROWS);
-    for (const [s, e] of scan(line)) addSpan(coverage, row, grid.n, (s - grid.x0) / grid.pitch, (e - grid.x0) / grid.pitch, 1 / SUB_ROWS);
-  }
-  return coverage;
+  return stateCoverage([polygons], grid)[1];
 }
 
 /**
@@ -73,23 +96,8 @@ export function polygonCoverage(polygons: Float64Array[], grid: Grid): Float32Ar
  */
 export function stateCoverage(layers: Float64Array[][], grid: Grid): Float32Array[] {
   const { n, x0, pitch } = grid;
-  const states = 2 ** layers.length;
-  const coverage = Array.from({ length: states }, (_, s) => (s === 0 ? new Float32Array(0) : new Float32Array(n * n)));
-  const scanners = layers.map((polygons) => spanScanner(polygons, grid));
-  for (let line = 0; line < n * SUB_ROWS; line++) {
-    const row = Math.floor(line / SUB_ROWS);
-    const events: Array<{ x: number; bit: number; enter: boolean }> = [];
-    scanners.forEach((scan, k) => {
-      for (const [s, e] of scan(line)) events.push({ x: s, bit: 1 << k, enter: true }, { x: e, bit: 1 << k, enter: false });
-    });
-    events.sort((a, b) => a.x - b.x);
-    let state = 0;
-    for (let i = 0; i < events.length; i++) {
-      state = events[i].enter ? state | events[i].bit : state & ~events[i].bit;
-      const next = events[i + 1];
-      if (state !== 0 && next && next.x > events[i].x) addSpan(coverage[state], row, n, (events[i].x - x0) / pitch, (next.x - x0) / pitch, 1 / SUB_ROWS);
-    }
-  }
+  const coverage = Array.from({ length: 2 ** layers.length }, (_, s) => (s === 0 ? new Float32Array(0) : new Float32Array(n * n)));
+  sweepStates(layers, grid, (row, a, b, state) => addSpan(coverage[state], row, n, (a - x0) / pitch, (b - x0) / pitch, 1 / SUB_ROWS));
   return coverage;
 }
 

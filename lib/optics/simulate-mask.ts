@@ -11,8 +11,9 @@ import type { AxialScan, ChromaticResult, FocalMap, FocusResult, Illumination, O
 const ORDERS = [-1, 1, 2, 3, 4, 5];
 /** Below this an order is reported without a position: there is no focus to find. */
 const FAINT_ORDER = 2e-3;
-const MAP_SIZE = 49;
-const MAP_AIRY_RADII = 3;
+const MAP_SIZE = 41;
+/** the map spans ±MAP_AIRY_RADII Airy radii at 8 samples per radius */
+const MAP_AIRY_RADII = 2.5;
 
 /**
  * The optical check: scalar diffraction of the mask as fabricated (the layout's polygons, not the ideal
@@ -60,7 +61,7 @@ export function simulateMask(design: CompiledDesign, library: LayoutLibrary, opt
     const na = equivalentRadius / Math.hypot(equivalentRadius, ez);
     const airyRadius = (0.61 * lambda0) / na;
     const peakZ = scanPeak(engine, ex, ey, 0.85 * ez, 1.15 * ez);
-    const step = airyRadius / 8;
+    const step = airyRadius / ((MAP_SIZE - 1) / 2 / MAP_AIRY_RADII);
     const map = engine.focalMap(ex, ey, peakZ.z, step, MAP_SIZE);
     const peak = mapPeak(map, MAP_SIZE);
     const half = (MAP_SIZE - 1) / 2;
@@ -96,7 +97,6 @@ export function simulateMask(design: CompiledDesign, library: LayoutLibrary, opt
   });
 
   const chromatic = chromaticShift(design, engine, illumination, options, expectedFor, built.reach, warnings, (f) => progress(0.7 + 0.3 * f));
-  engine.setWavelength(lambda0);
   progress(1);
   return {
     wavelength_um: lambda0,
@@ -126,11 +126,11 @@ function checkInputs(design: CompiledDesign, illumination: Illumination): void {
 
 /** The axial intensity peak in [lo, hi]: a coarse scan, a fine scan around its best point, a parabola. */
 function scanPeak(engine: OpticsEngine, x: number, y: number, lo: number, hi: number): { z: number; value: number } {
-  const coarse = 48;
+  const coarse = 32;
   const dz = (hi - lo) / (coarse - 1);
   const first = engine.axialIntensities(x, y, lo, dz, coarse);
   const best = argMax(first);
-  const fine = 25;
+  const fine = 17;
   const fineLo = lo + (best - 1) * dz;
   const fineDz = (2 * dz) / (fine - 1);
   const second = engine.axialIntensities(x, y, fineLo, fineDz, fine);
@@ -149,7 +149,7 @@ function argMax(values: Float64Array): number {
   return best;
 }
 
-const DEFAULT_BAND_SAMPLES = 9;
+const DEFAULT_BAND_SAMPLES = 7;
 
 function chromaticShift(
   design: CompiledDesign,
