@@ -6,7 +6,8 @@ export default defineConfig({
   test: {
     include: ['tests/**/*.test.ts'],
     environment: 'node',
-    testTimeout: 60_000,
+    // Browser flows share two cores with the app, the worker and PostgreSQL during `npm test`.
+    testTimeout: 120_000,
     hookTimeout: 120_000,
   },
 });
