@@ -133,8 +133,8 @@ export function compileProgram(
 
   function arithmetic(e: Extract<Expr, { kind: 'binary' }>, a: Val, b: Val): Val {
     const op = e.op;
+    if (op === '/' && b.k === 'num' && b.v === 0) fail(e.right.span, 'division by zero');
     if (a.k === 'num' && b.k === 'num') {
-      if (op === '/' && b.v === 0) fail(e.right.span, 'division by zero');
       const v = op === '+' ? a.v + b.v : op === '-' ? a.v - b.v : op === '*' ? a.v * b.v : op === '/' ? a.v / b.v : a.v ** b.v;
       return finite(v, e.span);
     }
@@ -224,6 +224,7 @@ export function compileProgram(
     const b = findBuiltin(e.callee)!;
     if (b.category === 'math') {
       const args = e.args.map((a) => evaluate(a.value));
+      if (b.name === 'mod' && args[1].k === 'num' && args[1].v === 0) fail(e.args[1].value.span, 'mod by zero');
       if (args.every((a) => a.k === 'num')) return finite(mathValue(b.name, args.map((a) => (a as { v: number }).v)), e.span);
       return { k: 'field', f: mathField(b.name, args.map((a, i) => field(a, e.args[i].value.span))) };
     }

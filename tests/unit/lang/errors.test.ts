@@ -80,6 +80,8 @@ describe('type and unit errors', () => {
     expect(bad('profile lens(focal: 1 mm)\nquantize binary(duty: 1.2)\n')[0]).toMatch(/duty must lie between 0 and 1/);
     expect(bad('profile lens(focal: 1 mm)\nquantize multilevel(levels: 6)\n')[0]).toMatch(/power of two/);
     expect(bad('profile vortex(charge: 1.5)\nquantize binary()\n')[0]).toMatch(/whole number/);
+    expect(bad('profile x / (0 um)\nquantize binary()\n')).toEqual(['division by zero']);
+    expect(bad('profile mod(x, 0 um) / 1 um\nquantize binary()\n')).toEqual(['mod by zero']);
   });
 
   it('warns about unused bindings without failing', () => {
