@@ -28,10 +28,11 @@ pg_data_dir() {
   echo "/var/lib/postgresql/zonewright-$key"
 }
 
+# From / so the postgres user is not left in a folder it may not enter.
 as_postgres() {
-  if [ "$(id -un)" = "$PG_USER_OS" ]; then "$@"
-  elif [ "$(id -u)" -eq 0 ]; then runuser -u "$PG_USER_OS" -- "$@"
-  else sudo -u "$PG_USER_OS" -- "$@"
+  if [ "$(id -un)" = "$PG_USER_OS" ]; then (cd / && "$@")
+  elif [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u "$PG_USER_OS" -- "$@")
+  else (cd / && sudo -u "$PG_USER_OS" -- "$@")
   fi
 }
 
@@ -84,7 +85,9 @@ start() {
   if zw_port_open "$PGPORT"; then
     zw_fail "port $PGPORT is taken by another program; stop it or set PGPORT to a free port"
   fi
+  # The server writes its own log, so it must sit where the postgres user can reach.
   local log="$ZW_DATA/log/postgres.log"
+  case "$data" in "$ZW_DATA"/*) ;; *) log="$data.log" ;; esac
   touch "$log"; chown "$PG_USER_OS:" "$log"
   # No Unix socket: TCP on loopback only keeps this cluster apart from any system one.
   as_postgres "$bin/pg_ctl" -D "$data" -l "$log" -w -t 60 \
