@@ -37,31 +37,37 @@ export function phaseFieldOf(waves: Wave[]): PhaseField & { phaseRow(y: number, 
     out[1] = im;
   };
   const scratch = new Float64Array(2);
+  // row buffers for phaseRow, grown once to the longest row seen (no allocation afterwards)
+  let rowRe = new Float64Array(0);
+  let rowIm = new Float64Array(0);
+  const fieldRow = (y: number, xs: Float64Array, outRe: Float64Array, outIm: Float64Array): void => {
+    outRe.fill(0, 0, xs.length);
+    outIm.fill(0, 0, xs.length);
+    for (let k = 0; k < n; k++) {
+      const at = ats[k];
+      const w = weights[k];
+      const c = offsets[k];
+      for (let i = 0; i < xs.length; i++) {
+        const p = at(xs[i], y) + c;
+        outRe[i] += w * Math.cos(p);
+        outIm[i] += w * Math.sin(p);
+      }
+    }
+  };
   return {
     phase(x, y) {
       sum(x, y, scratch);
       return Math.atan2(scratch[1], scratch[0]);
     },
     field: sum,
-    fieldRow(y, xs, outRe, outIm) {
-      outRe.fill(0, 0, xs.length);
-      outIm.fill(0, 0, xs.length);
-      for (let k = 0; k < n; k++) {
-        const at = ats[k];
-        const w = weights[k];
-        const c = offsets[k];
-        for (let i = 0; i < xs.length; i++) {
-          const p = at(xs[i], y) + c;
-          outRe[i] += w * Math.cos(p);
-          outIm[i] += w * Math.sin(p);
-        }
-      }
-    },
+    fieldRow,
     phaseRow(y, xs, out) {
-      for (let i = 0; i < xs.length; i++) {
-        sum(xs[i], y, scratch);
-        out[i] = Math.atan2(scratch[1], scratch[0]);
+      if (rowRe.length < xs.length) {
+        rowRe = new Float64Array(xs.length);
+        rowIm = new Float64Array(xs.length);
       }
+      fieldRow(y, xs, rowRe, rowIm);
+      for (let i = 0; i < xs.length; i++) out[i] = Math.atan2(rowIm[i], rowRe[i]);
     },
     maxSpatialFrequency(x0, y0, x1, y1) {
       const box = normaliseBox(x0, y0, x1, y1);
