@@ -6,11 +6,10 @@ import { fromPath, regionPaths } from './clip-region';
 import { GeometryError } from './errors';
 import { fracture } from './fracture';
 import { resolveMaskOptions, type MaskOptions } from './options';
-import { cleanLoop } from './polygon-math';
+import { cleanLoop, loopBounds } from './polygon-math';
 import { regionBox, validateRegion } from './region';
 import { buildReport, type DrawnLayer } from './report';
 import type { ManufacturabilityReport } from './report-types';
-import { safeStep } from './scan-segment';
 import { designAnchor, planMaskTiles } from './tiles';
 
 export interface MaskResult {
@@ -49,17 +48,19 @@ function toLayout(loops: Float64Array[]): LayoutPolygon[] {
 /** Joins tile results into the library and measures the report. */
 export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles: MaskTileResult[]): MaskResult {
   const infos = maskLayers(design, options);
-  const box = regionBox(design.aperture);
   const phaseGap = layerFunctionSpecs(design.quantization).map((s) => s.phaseGap);
+  const gridUm = options.databaseUnit / 1e-6;
   const drawn: DrawnLayer[] = infos.map((info, k) => {
-    const frequency = Math.max(...design.pieces.map((p) => p.field.maxSpatialFrequency(box.x0, box.y0, box.x1, box.y1)));
-    const narrowestPossible = safeStep(phaseGap[k], frequency, Infinity) / 0.9;
-    return {
-      info,
-      polygons: tiles.flatMap((t) => t.layers[k]),
-      clipped: tiles.flatMap((t) => t.clipped[k]),
-      checkAll: !(narrowestPossible >= options.minimumFeature),
+    const clipped = new Set(tiles.flatMap((t) => t.clipped[k]));
+    // Inside one zone the phase runs through at least phaseGap, at most 2π·F per µm: the zone is at
+    // least phaseGap/(2π·F) wide. Only cut polygons and those this bound cannot clear are opened.
+    const mayBeNarrow = (p: Float64Array) => {
+      if (clipped.has(p)) return true;
+      const b = loopBounds(p);
+      const frequency = Math.max(...design.pieces.map((piece) => piece.field.maxSpatialFrequency(b.x0 * gridUm, b.y0 * gridUm, b.x1 * gridUm, b.y1 * gridUm)));
+      return !(phaseGap[k] / (2 * Math.PI * frequency) >= options.minimumFeature);
     };
+    return { info, polygons: tiles.flatMap((t) => t.layers[k]), mayBeNarrow };
   });
   const report = buildReport(design, options, drawn, designAnchor(design));
   const scale = 1e-6 / options.databaseUnit;
@@ -94,6 +95,6 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
 export function buildMask(design: CompiledDesign, options: Partial<MaskOptions> = {}): MaskResult {
   const resolved = resolveMaskOptions(options);
   validateDesign(design);
-  const tiles = planMaskTiles(design).map((plan) => buildMaskTile(design, resolved, plan));
+  const tiles = planMaskTiles(design, resolved.chordTolerance).map((plan) => buildMaskTile(design, resolved, plan));
   return assembleMask(design, resolved, tiles);
 }

@@ -87,6 +87,13 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
       const s = snapLoop(loop, scale);
       if (s) snapped.push(s);
     }
+    if (plan.exact) {
+      // Traced inside the clip region itself: loops that reach its edge are the ones it cuts.
+      const fractured = fracture(snapped, options.maxVertices);
+      layers.push(fractured);
+      clipped.push(fractured.filter((l) => !insideRegion(region, l, gridUm)));
+      continue;
+    }
     const toClip = loopsToClip(snapped, (l) => !insideRegion(region, l, gridUm));
     const kept = snapped.filter((_, i) => !toClip[i]);
     let clippedLoops: Float64Array[] = [];

@@ -121,3 +121,57 @@ export function regionDomain(region: Region): ConvexPolygon {
       return regionDomain(region.parts[0]);
   }
 }
+
+/** Vertices on the circle, a multiple of 8 of them starting at angle 0, chords sagging at most `tolerance`. */
+export function inscribedCircle(cx: number, cy: number, r: number, tolerance: number): ConvexPolygon {
+  const n = 8 * Math.max(2, Math.ceil(Math.PI / Math.acos(Math.max(-1, 1 - tolerance / r)) / 8));
+  const out = new Float64Array(2 * n);
+  for (let i = 0; i < n; i++) {
+    const a = (2 * Math.PI * i) / n;
+    out[2 * i] = cx + r * Math.cos(a);
+    out[2 * i + 1] = cy + r * Math.sin(a);
+  }
+  return out;
+}
+
+function isConvexCcw(points: Float64Array): boolean {
+  const n = points.length / 2;
+  let area = 0;
+  for (let i = 0; i < n; i++) {
+    const j = (i + 1) % n;
+    const k = (i + 2) % n;
+    const cross = (points[2 * j] - points[2 * i]) * (points[2 * k + 1] - points[2 * j + 1]) - (points[2 * j + 1] - points[2 * i + 1]) * (points[2 * k] - points[2 * j]);
+    if (cross < 0) return false;
+    area += points[2 * i] * points[2 * j + 1] - points[2 * j] * points[2 * i + 1];
+  }
+  return area > 0;
+}
+
+/**
+ * The region itself as a convex polygon (circles as inscribed polygons within the chord tolerance)
+ * when it is convex, else null. Tracing inside it needs no clipping afterwards.
+ */
+export function exactConvexDomain(region: Region, tolerance: number): ConvexPolygon | null {
+  switch (region.kind) {
+    case 'circle':
+      return inscribedCircle(region.cx, region.cy, region.r, tolerance);
+    case 'rectangle':
+      return regionDomain(region);
+    case 'polygon': {
+      if (isConvexCcw(region.points)) return region.points.slice();
+      const reversed = new Float64Array(region.points.length);
+      for (let i = 0; i < region.points.length; i += 2) {
+        reversed[i] = region.points[region.points.length - 2 - i];
+        reversed[i + 1] = region.points[region.points.length - 1 - i];
+      }
+      return isConvexCcw(reversed) ? reversed : null;
+    }
+    case 'intersection': {
+      const parts = region.parts.map((p) => exactConvexDomain(p, tolerance));
+      if (parts.some((p) => p === null)) return null;
+      return (parts as ConvexPolygon[]).reduce((a, b) => intersectConvex(a, b));
+    }
+    default:
+      return null;
+  }
+}

@@ -12,7 +12,7 @@ export interface NarrowPlace {
 
 function offset(paths: ClipperLib.Paths, delta: number, arcTolerance: number): ClipperLib.Paths {
   const o = new ClipperLib.ClipperOffset(2, arcTolerance);
-  o.AddPaths(paths, ClipperLib.JoinType.jtRound, ClipperLib.EndType.etClosedPolygon);
+  o.AddPaths(paths, ClipperLib.JoinType.jtMiter, ClipperLib.EndType.etClosedPolygon);
   const out: ClipperLib.Paths = [];
   o.Execute(out, delta);
   return out;
@@ -20,8 +20,9 @@ function offset(paths: ClipperLib.Paths, delta: number, arcTolerance: number): C
 
 /**
  * Parts of a polygon narrower than `width` (grid units), found by a morphological opening: shrink by
- * half the width, grow back, and keep what did not come back. Rounded corners also lose a little
- * area, so only pieces larger than a quarter of the width squared are reported.
+ * half the width, grow back, and keep what did not come back. Mitred joins give square corners back
+ * whole; sharp tips still lose a little area, so only pieces larger than a quarter of the width
+ * squared are reported.
  */
 export function narrowPlaces(polygon: Float64Array, width: number, arcTolerance: number): NarrowPlace[] {
   const original = [toPath(polygon)];

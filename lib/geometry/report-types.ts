@@ -50,7 +50,7 @@ export interface ManufacturabilityReport {
   chordTolerance_um: number;
   maxVertices: number;
   minimumFeature_um: number;
-  /** drawn zones crossed by the measuring ray from the design's centre towards +x */
+  /** drawn zones crossed by the measuring ray from the design's centre (0.1 rad above +x) */
   zoneCount: number;
   /** the last whole drawn zone on the measuring ray */
   outermostZone: MeasuredWidth | null;

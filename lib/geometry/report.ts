@@ -13,11 +13,8 @@ const LISTED = 200;
 export interface DrawnLayer {
   info: LayerInfo;
   polygons: Float64Array[];
-  /** polygons cut by the aperture or a piece's region (narrow features can only appear there when
-   *  the frequency bound proves the zones themselves wide enough) */
-  clipped: Float64Array[];
-  /** true when the frequency bound cannot prove every zone wider than the minimum feature */
-  checkAll: boolean;
+  /** whether a polygon may hold a feature narrower than the minimum (the others are proven wide enough) */
+  mayBeNarrow: (polygon: Float64Array) => boolean;
 }
 
 const fmt = (v: number) => (Math.abs(v) >= 100 ? v.toFixed(1) : v.toPrecision(3));
@@ -47,10 +44,10 @@ export function buildReport(design: CompiledDesign, options: MaskOptions, layers
         firstSliver ??= { x: p[0] * gridUm, y: p[1] * gridUm };
       }
     }
-    const candidates = layer.checkAll ? layer.polygons : layer.clipped;
     let layerNarrow = 0;
     let first: NarrowFeature | null = null;
-    for (const p of candidates) {
+    for (const p of layer.polygons) {
+      if (!layer.mayBeNarrow(p)) continue;
       for (const place of narrowPlaces(p, options.minimumFeature * scale, options.chordTolerance * scale)) {
         layerNarrow++;
         const feature = { layer: layer.info.layer, datatype: layer.info.datatype, x_um: place.x * gridUm, y_um: place.y * gridUm, area_um2: place.area * gridUm * gridUm };

@@ -82,8 +82,13 @@ export function scanSegment(
       const t = t0 + ((t1 - t0) * i) / n;
       const gt = at(t);
       if (gPrev > 0 !== gt > 0) {
-        out.t.push(refineRoot(at, tPrev, gPrev, t, gt, tolerance / length));
-        out.step.push(chunkLength / n);
+        const root = refineRoot(at, tPrev, gPrev, t, gt, tolerance / length);
+        // A zero that g only touches (a phase extremum sitting on a boundary level) is no boundary.
+        const eps = Math.min(1e-3, chunkLength / n / 4) / length;
+        if (at(root - eps) > 0 !== at(root + eps) > 0) {
+          out.t.push(root);
+          out.step.push(chunkLength / n);
+        }
       }
       tPrev = t;
       gPrev = gt;

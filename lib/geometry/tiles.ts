@@ -1,5 +1,5 @@
-import type { CompiledDesign } from '../design/types';
-import { boxPolygon, intersectConvex, regionDomain, type ConvexPolygon } from './convex-domain';
+import type { CompiledDesign, Region } from '../design/types';
+import { boxPolygon, exactConvexDomain, intersectConvex, regionDomain, type ConvexPolygon } from './convex-domain';
 import { regionBox } from './region';
 
 /** One independent unit of work: a piece of the design inside a convex part of its domain. */
@@ -11,6 +11,8 @@ export interface MaskTilePlan {
   /** seed lines run at anchor + (k + ½)·seedSpacing */
   anchorX: number;
   anchorY: number;
+  /** the domain is the clip region itself (convex), so nothing needs clipping */
+  exact: boolean;
 }
 
 /**
@@ -28,12 +30,15 @@ export function designAnchor(design: CompiledDesign): { x: number; y: number } {
  * Splits every piece's domain into up to four quadrants around the anchor. Quadrants run on separate
  * workers, and their edges are fracture cuts that cross lens zones at right angles.
  */
-export function planMaskTiles(design: CompiledDesign): MaskTilePlan[] {
+export function planMaskTiles(design: CompiledDesign, chordTolerance: number): MaskTilePlan[] {
   const anchor = designAnchor(design);
   const plans: MaskTilePlan[] = [];
   const apertureDomain = regionDomain(design.aperture);
   design.pieces.forEach((piece, index) => {
-    const domain: ConvexPolygon = piece.region ? intersectConvex(apertureDomain, regionDomain(piece.region)) : apertureDomain;
+    const clip: Region = piece.region ? { kind: 'intersection', parts: [design.aperture, piece.region] } : design.aperture;
+    const exactDomain = exactConvexDomain(clip, chordTolerance);
+    const domain: ConvexPolygon =
+      exactDomain ?? (piece.region ? intersectConvex(apertureDomain, regionDomain(piece.region)) : apertureDomain);
     if (domain.length < 6) return;
     let x0 = Infinity;
     let y0 = Infinity;
@@ -50,7 +55,7 @@ export function planMaskTiles(design: CompiledDesign): MaskTilePlan[] {
     for (let i = 0; i + 1 < xs.length; i++) {
       for (let j = 0; j + 1 < ys.length; j++) {
         const part = intersectConvex(domain, boxPolygon({ x0: xs[i], y0: ys[j], x1: xs[i + 1], y1: ys[j + 1] }));
-        if (part.length >= 6) plans.push({ piece: index, domain: Array.from(part), anchorX: anchor.x, anchorY: anchor.y });
+        if (part.length >= 6) plans.push({ piece: index, domain: Array.from(part), anchorX: anchor.x, anchorY: anchor.y, exact: exactDomain !== null });
       }
     }
   });

@@ -167,7 +167,14 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
           return { kind: 'exit', tau: end.tau };
         }
         L *= 0.5;
-        if (L < minStep) throw new GeometryError(`A zone boundary could not be followed to the edge near (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+        if (L < minStep) {
+          // Within a fraction of the grid of the edge (a singular point on it, or a corner): end here.
+          const u = edgeFraction(exitEdge, hx, hy);
+          const status = visitChord(px, py, hx, hy, start, out.length);
+          if (status === 'duplicate') return { kind: 'duplicate' };
+          out.push(hx, hy);
+          return { kind: 'exit', tau: perimeterPosition(domain, exitEdge, u) };
+        }
         continue;
       }
       let sag = Infinity;
@@ -226,6 +233,15 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     throw new GeometryError(`A zone boundary did not close near (${x0.toFixed(4)}, ${y0.toFixed(4)}) µm.`);
   };
 
+  const edgeFraction = (edge: number, x: number, y: number): number => {
+    const poly = domain.polygon;
+    const ax = poly[2 * edge];
+    const ay = poly[2 * edge + 1];
+    const ex = poly[(2 * edge + 2) % poly.length] - ax;
+    const ey = poly[(2 * edge + 3) % poly.length] - ay;
+    return Math.max(0, Math.min(1, ((x - ax) * ex + (y - ay) * ey) / (ex * ex + ey * ey)));
+  };
+
   /** Where the boundary meets domain edge e near (hx, hy), if the chord from p to it is within tolerance. */
   const finishOnEdge = (edge: number, hx: number, hy: number, px: number, py: number, gx: number, gy: number, gn: number, tx: number, ty: number) => {
     const poly = domain.polygon;
@@ -270,13 +286,75 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     return { x: px + turnRadius * Math.cos(o), y: py + turnRadius * Math.sin(o) };
   };
 
+  const n = domain.polygon.length / 2;
+  /**
+   * Along the domain's edge, exits and entries must alternate. Two exits in a row (or two entries)
+   * mean a boundary crossing slipped between two samples, which happens near zeros of a combined
+   * field where arg u outruns the parts' frequency bound: rescan that stretch 16 times finer and
+   * trace what it finds, until the edge is consistent.
+   */
+  const repairMissedCrossings = (found: Chain[]): void => {
+    for (let round = 0; round < 64; round++) {
+      const events = found.flatMap((c) => [
+        { tau: c.entry, entry: true },
+        { tau: c.exit, entry: false },
+      ]);
+      if (events.length === 0) return;
+      events.sort((a, b) => a.tau - b.tau);
+      let k = events.findIndex((e, i) => e.entry === events[(i + 1) % events.length].entry);
+      if (k < 0) return;
+      const from = events[k].tau;
+      const to = events[(k + 1) % events.length].tau;
+      const before = found.length;
+      for (const crossing of rescanEdge(from, to)) {
+        if (found.some((c) => Math.abs(c.entry - crossing.tau) < tol || Math.abs(c.exit - crossing.tau) < tol)) continue;
+        const dir = crossing.entry ? 1 : -1;
+        buffer.length = 0;
+        const end = trace(crossing.x, crossing.y, dir, null, buffer);
+        if (end.kind !== 'exit') continue;
+        const points = buffer.toArray();
+        if (crossing.entry) found.push({ points, entry: crossing.tau, exit: end.tau });
+        else found.push({ points: reversePoints(points), entry: end.tau, exit: crossing.tau });
+      }
+      if (found.length === before) return;
+    }
+  };
+
+  /** Crossings on the domain's edge between perimeter positions a and b (counter-clockwise), sampled finely. */
+  const rescanEdge = (a: number, b: number) => {
+    const out: { x: number; y: number; tau: number; entry: boolean }[] = [];
+    const span = (b - a + domain.perimeter) % domain.perimeter;
+    for (let e = 0; e < n; e++) {
+      const e0 = domain.cumulative[e];
+      const e1 = domain.cumulative[e + 1];
+      const lo = (e0 - a + domain.perimeter) % domain.perimeter;
+      const len = e1 - e0;
+      // portion of edge e inside the span, as fractions of the edge
+      const u0 = lo < span ? 0 : lo + len > domain.perimeter ? (domain.perimeter - lo) / len : 1;
+      const u1 = lo < span ? Math.min(1, (span - lo) / len) : lo + len > domain.perimeter ? Math.min(1, (domain.perimeter - lo + span) / len) : 0;
+      if (!(u1 > u0)) continue;
+      const ax = domain.polygon[2 * e];
+      const ay = domain.polygon[2 * e + 1];
+      const ex = domain.polygon[(2 * e + 2) % domain.polygon.length] - ax;
+      const ey = domain.polygon[(2 * e + 3) % domain.polygon.length] - ay;
+      const found = scanSegment(g, field, phaseGap / 16, ax + u0 * ex, ay + u0 * ey, ax + u1 * ex, ay + u1 * ey, seedTolerance);
+      for (const t of found.t) {
+        const u = u0 + t * (u1 - u0);
+        const x = ax + u * ex;
+        const y = ay + u * ey;
+        gradient(x, y, g(x, y));
+        out.push({ x, y, tau: perimeterPosition(domain, e, u), entry: grad[1] * domain.nx[e] - grad[0] * domain.ny[e] > 0 });
+      }
+    }
+    return out;
+  };
+
   const chains: Chain[] = [];
   const loops: Loop[] = [];
   const buffer = new PointBuffer(1024);
   const backward = new PointBuffer(256);
 
   // Entries on the domain edge: the boundary enters with the drawn side on its left.
-  const n = domain.polygon.length / 2;
   for (let e = 0; e < n; e++) {
     const ax = domain.polygon[2 * e];
     const ay = domain.polygon[2 * e + 1];
@@ -325,8 +403,27 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     });
   }
 
-  loops.push(...assembleChains(chains, domain, g));
+  repairMissedCrossings(chains);
+  loops.push(...assembleChains(withoutRepeats(chains, tol), domain, g));
   return loops.filter((l) => l.length >= 6);
+}
+
+function reversePoints(points: Float64Array): Float64Array {
+  const out = new Float64Array(points.length);
+  for (let i = 0, j = points.length - 2; j >= 0; i += 2, j -= 2) {
+    out[i] = points[j];
+    out[i + 1] = points[j + 1];
+  }
+  return out;
+}
+
+/**
+ * A contour reached from two seeds that were not recognised as the same one comes back twice; the
+ * copies enter the domain at the same place.
+ */
+function withoutRepeats(chains: Chain[], tolerance: number): Chain[] {
+  const sorted = [...chains].sort((a, b) => a.entry - b.entry);
+  return sorted.filter((c, i) => i === 0 || c.entry - sorted[i - 1].entry > tolerance || Math.abs(c.exit - sorted[i - 1].exit) > tolerance);
 }
 
 /**
@@ -337,7 +434,12 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
 export function assembleChains(chains: Chain[], domain: Domain, g: (x: number, y: number) => number): Loop[] {
   const poly = domain.polygon;
   const vertexCount = poly.length / 2;
-  if (chains.length === 0) return g(poly[0], poly[1]) > 0 ? [poly.slice()] : [];
+  if (chains.length === 0) {
+    // The whole edge has one state; test it mid-edge, away from corners where g may only touch zero.
+    const mx = 0.5 * (poly[0] + poly[2]);
+    const my = 0.5 * (poly[1] + poly[3]);
+    return g(mx, my) > 0 ? [poly.slice()] : [];
+  }
   const order = chains.map((_, i) => i).sort((a, b) => chains[a].entry - chains[b].entry);
   const entries = order.map((i) => chains[i].entry);
   const nextChain = (tau: number): number => {

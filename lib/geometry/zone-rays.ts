@@ -12,24 +12,35 @@ export interface RayMeasurement {
 }
 
 const RAY_COUNT = 16;
+/** Rays start 0.1 rad above +x, off the axes and sector edges that scripts usually put there. */
+const RAY_OFFSET = 0.1;
 
 interface Crossing {
   s: number;
   /** |cos| of the angle between the ray and the boundary normal: converts ray length to width */
   cosine: number;
+  /** where one piece of a multiplexed design meets another: not a zone edge */
+  cut: boolean;
 }
 
-/** Distance from (x, y) along (dx, dy) to where the region ends, found by bisection on the signed distance. */
-function exitDistance(region: Region, x: number, y: number, dx: number, dy: number, reach: number): number {
-  if (regionSignedDistance(region, x, y) <= 0) return 0;
-  let lo = 0;
+/**
+ * Where the ray from (x, y) along (dx, dy) first enters the region (stepping by the distance bound)
+ * and where it leaves it again (bisection on the signed distance); null when it never enters.
+ */
+function insideSpan(region: Region, x: number, y: number, dx: number, dy: number, reach: number): [number, number] | null {
+  let start = 0;
+  for (let d = regionSignedDistance(region, x, y); d <= 0; d = regionSignedDistance(region, x + start * dx, y + start * dy)) {
+    start += Math.max(-d, 1e-3);
+    if (start > reach) return null;
+  }
+  let lo = start;
   let hi = reach;
   for (let i = 0; i < 60; i++) {
     const mid = 0.5 * (lo + hi);
     if (regionSignedDistance(region, x + mid * dx, y + mid * dy) > 0) lo = mid;
     else hi = mid;
   }
-  return lo;
+  return [start, lo];
 }
 
 /**
@@ -44,11 +55,12 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
   const result: RayMeasurement = { zoneCount: 0, outermostZone: null, narrowestZone: null, smallestGap: null };
   const delta = 1e-4;
   for (let r = 0; r < RAY_COUNT; r++) {
-    const angle = (2 * Math.PI * r) / RAY_COUNT;
+    const angle = RAY_OFFSET + (2 * Math.PI * r) / RAY_COUNT;
     const dx = Math.cos(angle);
     const dy = Math.sin(angle);
-    const end = exitDistance(design.aperture, centre.x, centre.y, dx, dy, reach);
-    if (end <= 0) continue;
+    const span = insideSpan(design.aperture, centre.x, centre.y, dx, dy, reach);
+    if (!span) continue;
+    const [begin, end] = span;
     const drawnAt = (s: number) => {
       const x = centre.x + s * dx;
       const y = centre.y + s * dy;
@@ -57,8 +69,8 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
     };
     const crossings: Crossing[] = [];
     const chunk = 64;
-    let s0 = 0;
-    let v0 = drawnAt(0);
+    let s0 = begin;
+    let v0 = drawnAt(begin);
     const startsDrawn = v0 > 0;
     while (s0 < end) {
       const s1 = Math.min(end, s0 + chunk);
@@ -83,7 +95,8 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
           const gx = (p.g(x + delta, y) - gv) / delta;
           const gy = (p.g(x, y + delta) - gv) / delta;
           const norm = Math.sqrt(gx * gx + gy * gy);
-          crossings.push({ s: sc, cosine: norm > 0 ? Math.abs(gx * dx + gy * dy) / norm : 1 });
+          const cut = pieceAt(x - 1e-3 * dx, y - 1e-3 * dy) !== pieceAt(x + 1e-3 * dx, y + 1e-3 * dy);
+          crossings.push({ s: sc, cosine: norm > 0 ? Math.abs(gx * dx + gy * dy) / norm : 1, cut });
         }
         v0 = v;
       }
@@ -103,6 +116,7 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
         x_um: centre.x + mid * dx,
         y_um: centre.y + mid * dy,
       };
+      if (a.cut || b.cut) continue;
       if (drawn) {
         zones.push(w);
         if (!result.narrowestZone || w.width_um < result.narrowestZone.width_um) result.narrowestZone = w;
