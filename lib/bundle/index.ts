@@ -1,6 +1,6 @@
 export { radialZones, zoneTableCsv, type ZoneRow } from './zone-table';
 export { layerMeaning, type LayerMeaning } from './layer-meaning';
 export { fabReadme } from './readme';
-export { zipBundle, type BundleEntry } from './zip-bundle';
+export { zipBundle, zipChunks, type BundleEntry } from './zip-bundle';
 export { sha256Hex } from './sha256';
 export type { BundleFile, BundleManifest } from './manifest';

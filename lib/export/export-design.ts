@@ -1,10 +1,7 @@
 import type { CompiledDesign } from '../design/types';
 import { fabReadme, radialZones, sha256Hex, zipBundle, zoneTableCsv, layerMeaning, type BundleEntry, type BundleFile, type BundleManifest } from '../bundle';
 import { gdsiiChunks } from '../gdsii';
-import { buildMask, type ManufacturabilityReport } from '../geometry';
-import { QuantizationError } from '../geometry/boundary-function';
-import { GeometryError } from '../geometry/errors';
-import { MaskOptionsError } from '../geometry/options';
+import { buildMask, GeometryError, MaskOptionsError, QuantizationError, RegionError, type ManufacturabilityReport } from '../geometry';
 import { compileScript } from '../lang';
 import { concatBytes } from '../layout/concat-bytes';
 import { textBytes } from '../layout/text-bytes';
@@ -115,7 +112,7 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
   const manifest: BundleManifest = { ...manifestBody, files: [describeFile(readme), ...contentListing] };
   const manifestEntry: BundleEntry = { name: 'manifest.json', data: `${JSON.stringify(manifest, null, 2)}\n` };
   const entries = [readme, manifestEntry, ...contentFiles];
-  const zip = await zipBundle(entries, settings.timestamp);
+  const zip = zipBundle(entries, settings.timestamp);
   settings.onProgress(1, 'done');
   return { zip, sha256: sha256Hex(zip), manifest, report, files: entries.map(describeFile), summary, design };
 }
@@ -142,7 +139,8 @@ function buildVariant(design: CompiledDesign, settings: ResolvedExportOptions, n
       name,
     });
   } catch (error) {
-    if (error instanceof MaskOptionsError || error instanceof QuantizationError) throw new ExportError('options', error.message);
+    if (error instanceof MaskOptionsError) throw new ExportError('options', error.message);
+    if (error instanceof QuantizationError || error instanceof RegionError) throw new ExportError('script', error.message);
     if (error instanceof GeometryError) throw new ExportError('layout', error.message);
     throw error;
   }

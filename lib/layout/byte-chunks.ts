@@ -46,6 +46,12 @@ export class ByteChunks {
     this.length += 4;
   }
 
+  u16le(value: number): void {
+    this.ensure(2);
+    this.view.setUint16(this.length, value, true);
+    this.length += 2;
+  }
+
   u32le(value: number): void {
     this.ensure(4);
     this.view.setUint32(this.length, value, true);

@@ -4,7 +4,7 @@ import { concatBytes } from '../layout/concat-bytes';
 import type { LayoutLibrary } from '../layout/types';
 import { validateLibrary } from '../layout/validate-library';
 import { cellElementRecords } from './cell-records';
-import { crc32Update } from './crc32';
+import { crc32Update } from '../layout/crc32';
 import { encoded, writeReal, writeString, writeUnsigned } from './encoding';
 import { freshModalState } from './modal-state';
 import { COMPRESSION_DEFLATE, END_RECORD_BYTES, MAGIC, RecordId, VALIDATION_CRC32 } from './record-ids';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { crc32Update } from '@/lib/oasis/crc32';
+import { crc32Update } from '@/lib/layout/crc32';
 import { encoded, writeGDelta, writeReal, writeSigned, writeString, writeUnsigned } from '@/lib/oasis/encoding';
 import { writePolygonPointList } from '@/lib/oasis/point-list';
 
