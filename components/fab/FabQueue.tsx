@@ -67,23 +67,26 @@ function FabItem({ item, runs, canRecord }: { item: FabItemView; runs: FabRunRow
         </div>
         <div className="grid grid-cols-1 gap-4 md:grid-cols-2">
           <div>
-            <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink/60">Layer map</h3>
+            <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-ink/60">Layer map (from the bundle)</h3>
             <table className="w-full text-left text-sm">
               <thead className="text-xs text-ink/60">
                 <tr>
-                  <th className="font-medium">Layer / datatype</th>
-                  <th className="font-medium">Name</th>
-                  <th className="font-medium">Purpose</th>
+                  <th className="pr-2 font-medium">Layer/datatype</th>
+                  <th className="pr-2 font-medium">Name</th>
+                  <th className="font-medium">Meaning</th>
                 </tr>
               </thead>
               <tbody>
-                {profile.layerMap.map((l) => (
-                  <tr key={`${l.layer}/${l.datatype}`} className="border-t border-hairline">
-                    <td className="numeric">
+                {item.layers.map((l) => (
+                  <tr key={`${l.layer}/${l.datatype}`} className="border-t border-hairline align-top">
+                    <td className="numeric pr-2">
                       {l.layer}/{l.datatype}
                     </td>
-                    <td>{l.name}</td>
-                    <td>{l.purpose}</td>
+                    <td className="pr-2">{l.name}</td>
+                    <td>
+                      {l.meaning ?? l.purpose}
+                      {l.tone ? <span className="block text-xs text-ink/60">{l.tone}</span> : null}
+                    </td>
                   </tr>
                 ))}
               </tbody>

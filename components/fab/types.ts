@@ -1,3 +1,4 @@
+import type { BundleLayer } from '@/db/queries/fab';
 import type { ProcessProfile } from '@/lib/schemas/designs';
 
 export interface FabItemView {
@@ -9,6 +10,7 @@ export interface FabItemView {
   teamName: string;
   role: string;
   profile: ProcessProfile;
+  layers: BundleLayer[];
   bundleSha256: string | null;
   bundleBytes: number | null;
   zoneCount: number | null;

@@ -158,7 +158,9 @@ export function MaskView({
     ctx.lineWidth = 1;
     ctx.strokeRect(Math.round(bx0) + 0.5, Math.round(by0) + 0.5, Math.round(bx1 - bx0), Math.round(by1 - by0));
 
-    ctx.font = '11px var(--font-mono), ui-monospace, monospace';
+    // Canvas fonts cannot read CSS variables; resolve the page's mono family first.
+    const mono = getComputedStyle(canvas).getPropertyValue('--font-mono').trim();
+    ctx.font = `11px ${mono ? `${mono}, ` : ''}ui-monospace, monospace`;
     for (const m of markers) {
       const [mx, my] = toScreen(view, size.width, size.height, m.x, m.y);
       const r = Math.max(8, ((m.width ?? 0) * s) / 2 + 4);
@@ -169,7 +171,10 @@ export function MaskView({
       ctx.stroke();
       const text = m.label ?? (m.width !== undefined ? `narrowest ${formatLength(m.width)}` : 'narrowest');
       ctx.fillStyle = WARNING;
-      ctx.fillText(text, mx + r + 4, my - 4);
+      // The label goes to the left of the ring when it would run off the right edge.
+      const textWidth = ctx.measureText(text).width;
+      const tx = mx + r + 4 + textWidth > size.width ? mx - r - 4 - textWidth : mx + r + 4;
+      ctx.fillText(text, tx, my - 4);
     }
     for (const p of pins) {
       const [px, py] = toScreen(view, size.width, size.height, p.x, p.y);

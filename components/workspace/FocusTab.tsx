@@ -35,9 +35,6 @@ export function FocusTab({ revisions }: { revisions: RevisionRow[] }) {
           ))}
         </Select>
       </label>
-      <Notice tone="warning">
-        Focused light can damage eyes and skin: view foci through a screen or camera, never directly, and follow your lab’s laser and LED safety rules.
-      </Notice>
       {stored.error ? <Notice tone="error">{stored.error.message}</Notice> : null}
       {stored.data && 'error' in stored.data ? <Notice tone="warning">The focus check could not run for this revision: {stored.data.error}</Notice> : null}
       {stored.data && 'result' in stored.data ? <FocusCheck result={stored.data.result as SimulationResult} progress={null} /> : null}

@@ -84,6 +84,7 @@ export function ProcessProfileForm({
       </fieldset>
       <fieldset disabled={!canEdit || busy}>
         <legend className="mb-1 text-sm font-medium">Layer map</legend>
+        <p className="mb-1 text-xs text-ink/60">The layers this process expects. Each bundle’s manifest lists the layers as written, which the fab queue shows.</p>
         <table className="w-full text-left text-sm">
           <thead className="text-xs text-ink/60">
             <tr>

@@ -1,10 +1,19 @@
 /** The fab queue: released revisions, their runs and inspection photos. Server code only. */
-import { and, desc, eq, inArray } from 'drizzle-orm';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { auditEvents, designs, fabPhotos, fabRuns, memberships, revisions, teams, users } from '@/db/schema';
 import { can, type TeamRole } from '@/lib/auth';
 import type { FabRunInput } from '@/lib/schemas/fab';
 import { applyMoveInTransaction, type Outcome, refuse, type SentNotification } from './review';
+
+export interface BundleLayer {
+  layer: number;
+  datatype: number;
+  name: string;
+  purpose: string;
+  meaning?: string;
+  tone?: string;
+}
 
 export interface FabQueueItem {
   revisionId: string;
@@ -16,6 +25,8 @@ export interface FabQueueItem {
   teamName: string;
   role: TeamRole;
   processProfile: Record<string, unknown>;
+  /** the layers as the bundle's manifest lists them, with what each means for the fab */
+  layers: BundleLayer[] | null;
   bundleSha256: string | null;
   bundleBytes: number | null;
   zoneCount: number | null;
@@ -36,6 +47,7 @@ export async function listFabQueue(userId: string): Promise<FabQueueItem[]> {
       teamName: teams.name,
       role: memberships.role,
       processProfile: revisions.processProfile,
+      layers: sql<BundleLayer[] | null>`${revisions.manifest} -> 'layers'`,
       bundleSha256: revisions.bundleSha256,
       bundleBytes: revisions.bundleBytes,
       zoneCount: revisions.zoneCount,

@@ -3,9 +3,10 @@
  * Lengths in µm; phase in radians.
  */
 import { z } from 'zod';
+import { MAX_SCRIPT_LENGTH } from '@/lib/lang';
 
-/** Longest script a design accepts; larger texts are refused before they reach the compiler. */
-export const MAX_SCRIPT_CHARS = 100_000;
+/** Longest script a design accepts (the language's own limit); larger texts are refused before they reach the compiler. */
+export const MAX_SCRIPT_CHARS = MAX_SCRIPT_LENGTH;
 export const MAX_MESSAGE_CHARS = 500;
 /** Phase-map files above this size are refused before they are parsed. */
 export const MAX_PHASE_MAP_BYTES = 8 * 1024 * 1024;
@@ -39,12 +40,14 @@ export const processProfileSchema = z
     databaseUnit: micrometres('Database unit', 0.0001, 1),
     /** largest distance of a polygon edge from the true curve */
     chordTolerance: micrometres('Chord tolerance', 0.0001, 10),
+    /** resist tone the fab exposes with: positive (exposed resist is removed) or negative */
     tone: z.enum(['positive', 'negative']),
     layerMap: z.array(layerAssignmentSchema).min(1, 'The layer map needs at least the zones layer.').max(32),
     processNotes: z.string().max(4000, 'Process notes are at most 4000 characters.'),
   })
-  .refine((p) => p.chordTolerance >= p.databaseUnit, {
-    message: 'The chord tolerance must be at least one database unit.',
+  // The geometry engine's own rule (lib/geometry/options.ts): no finer than a tenth of the grid.
+  .refine((p) => p.chordTolerance >= p.databaseUnit / 10, {
+    message: 'The chord tolerance must be at least a tenth of the database unit.',
     path: ['chordTolerance'],
   })
   .refine((p) => new Set(p.layerMap.map((l) => `${l.layer}/${l.datatype}`)).size === p.layerMap.length, {
@@ -53,7 +56,7 @@ export const processProfileSchema = z
   });
 export type ProcessProfile = z.infer<typeof processProfileSchema>;
 
-/** A starting profile for a new design: 1 nm grid, 10 nm chords (common practice, no source). */
+/** A starting profile for a new design: 1 nm grid, 10 nm chords (common practice, no source); layers as the geometry writes them. */
 export const DEFAULT_PROCESS_PROFILE: ProcessProfile = {
   minimumFeature: 0.5,
   databaseUnit: 0.001,
@@ -61,7 +64,7 @@ export const DEFAULT_PROCESS_PROFILE: ProcessProfile = {
   tone: 'positive',
   layerMap: [
     { purpose: 'zones', layer: 1, datatype: 0, name: 'zones' },
-    { purpose: 'label', layer: 2, datatype: 0, name: 'label' },
+    { purpose: 'label', layer: 10, datatype: 0, name: 'label' },
   ],
   processNotes: '',
 };

@@ -29,6 +29,7 @@ export default async function FabQueuePage() {
             teamName: i.teamName,
             role: i.role,
             profile: profile.success ? profile.data : DEFAULT_PROCESS_PROFILE,
+            layers: i.layers ?? [],
             bundleSha256: i.bundleSha256,
             bundleBytes: i.bundleBytes,
             zoneCount: i.zoneCount,
