@@ -4,6 +4,7 @@ import { buttonClass, DateTime, Notice, PageHeader, Panel, Tag } from '@/compone
 import { allows, pageMembership } from '@/app/_server/session';
 import { ROLE_LABELS } from '@/lib/auth';
 import { isRevisionState, STATE_LABELS } from '@/lib/workflow/states';
+import { activityWords } from './activity-words';
 import { recentActivity, teamDesigns, teamRevisionsIn } from './queries';
 
 export const metadata: Metadata = { title: 'Desk' };
@@ -101,7 +102,7 @@ export default async function DeskPage() {
               <li key={event.id} className="flex gap-3">
                 <DateTime value={event.createdAt} />
                 <span>
-                  {event.actorName ?? 'someone'} · <code className="text-xs">{event.action}</code>
+                  {event.actorName ?? 'Someone'} {activityWords(event.action, event.details)}
                 </span>
               </li>
             ))}

@@ -52,7 +52,7 @@ export async function teamRevisionsIn(teamId: string, state: string, notAuthored
 
 export async function recentActivity(teamId: string) {
   return db
-    .select({ id: auditEvents.id, action: auditEvents.action, createdAt: auditEvents.createdAt, actorName: users.name, subjectType: auditEvents.subjectType })
+    .select({ id: auditEvents.id, action: auditEvents.action, details: auditEvents.details, createdAt: auditEvents.createdAt, actorName: users.name, subjectType: auditEvents.subjectType })
     .from(auditEvents)
     .leftJoin(users, eq(auditEvents.actorId, users.id))
     .where(and(eq(auditEvents.teamId, teamId), ne(auditEvents.action, 'auth.signIn')))
