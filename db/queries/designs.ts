@@ -27,16 +27,6 @@ export async function getDesignForUser(designId: string, userId: string): Promis
   return rows[0] ? { design: rows[0].design, teamName: rows[0].teamName, role: rows[0].role ?? null } : null;
 }
 
-/** The user's role in a team, or null. */
-export async function roleInTeam(teamId: string, userId: string): Promise<TeamRole | null> {
-  const rows = await db
-    .select({ role: memberships.role })
-    .from(memberships)
-    .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)))
-    .limit(1);
-  return rows[0]?.role ?? null;
-}
-
 export interface DesignListItem {
   id: string;
   name: string;
