@@ -87,8 +87,8 @@ export async function run(args: string[]): Promise<number> {
     console.error(`${parsed.script}: error: ${error instanceof Error ? error.message : String(error)}`);
     return 1;
   }
-  if (parsed.json) console.log(JSON.stringify(result));
-  else console.log(formatTable(parsed.script, result));
+  // the dispatcher exits right after run(); wait until a piped stdout has taken the whole document
+  await new Promise((resolve) => process.stdout.write(`${parsed.json ? JSON.stringify(result) : formatTable(parsed.script, result)}\n`, resolve));
   return 0;
 }
 
