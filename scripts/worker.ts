@@ -5,10 +5,12 @@
 import path from 'node:path';
 import { closeDb } from '@/db';
 import { databaseUrl } from '@/db/url';
-import { exportStore } from '@/db/queries/revisions';
+import { exportStore, focusStore } from '@/db/queries/revisions';
 import { getBoss, stopBoss } from '@/lib/jobs/boss';
 import { EXPORT_EXPIRE_SECONDS, EXPORT_QUEUE } from '@/lib/jobs/queues';
-import { threadedExporter } from '@/lib/jobs/threaded-exporter';
+import type { Exporter } from '@/lib/jobs/export-job';
+import type { FocusTask } from '@/lib/jobs/focus-job';
+import { threadedTask } from '@/lib/jobs/threaded-task';
 import { workExportQueues } from '@/lib/jobs/work-queues';
 
 /** Wall-clock budget of one export; beyond it the export thread is stopped and the revision fails. */
@@ -16,8 +18,10 @@ const EXPORT_BUDGET_MS = Math.min(Number(process.env.ZW_EXPORT_BUDGET_MS ?? 240_
 
 async function main(): Promise<void> {
   const boss = await getBoss(databaseUrl(), { worker: true });
-  const exporter = threadedExporter({ modulePath: path.join(__dirname, '..', 'lib', 'jobs', 'export-revision.ts'), budgetMs: EXPORT_BUDGET_MS });
-  await workExportQueues(boss, { store: exportStore, exporter, log: (line) => console.log(`[worker] ${line}`) });
+  const jobs = path.join(__dirname, '..', 'lib', 'jobs');
+  const exporter: Exporter = threadedTask({ modulePath: path.join(jobs, 'export-revision.ts'), exportName: 'exportRevision', budgetMs: EXPORT_BUDGET_MS, what: 'export' });
+  const focusTask: FocusTask = threadedTask({ modulePath: path.join(jobs, 'focus-revision.ts'), exportName: 'focusCheckRevision', budgetMs: EXPORT_BUDGET_MS, what: 'focus check' });
+  await workExportQueues(boss, { store: exportStore, exporter, focusStore, focusTask, log: (line) => console.log(`[worker] ${line}`) });
   console.log(`[worker] working queue ${EXPORT_QUEUE} (budget ${EXPORT_BUDGET_MS} ms per export)`);
 
   let stopping = false;

@@ -9,7 +9,7 @@ import { reportFocusCheck } from '@/lib/jobs/report-figures';
 import { callApi } from './api';
 import type { RevisionRow } from './types';
 
-/** The optical check of a saved revision, computed by the export worker and stored with it. */
+/** The optical check of a saved revision, computed by the worker after its export and stored with it. */
 export function FocusTab({ revisions }: { revisions: RevisionRow[] }) {
   const ready = revisions.filter((r) => r.buildStatus === 'ready');
   const [chosen, setChosen] = useState<string | null>(null);
@@ -19,6 +19,8 @@ export function FocusTab({ revisions }: { revisions: RevisionRow[] }) {
     enabled: revisionId !== null,
     queryFn: async () => reportFocusCheck((await callApi<{ revision: { report: unknown } }>(`/api/revisions/${revisionId}`)).revision.report),
     staleTime: Infinity,
+    // The check runs after the bundle is stored; until it lands in the report, look again now and then.
+    refetchInterval: (query) => (query.state.data === null ? 3000 : false),
   });
   if (ready.length === 0) {
     return <p className="text-ink/70">The focus check runs with each saved revision’s export. Save a revision to see where its light goes.</p>;
@@ -38,7 +40,7 @@ export function FocusTab({ revisions }: { revisions: RevisionRow[] }) {
       {stored.error ? <Notice tone="error">{stored.error.message}</Notice> : null}
       {stored.data && 'error' in stored.data ? <Notice tone="warning">The focus check could not run for this revision: {stored.data.error}</Notice> : null}
       {stored.data && 'result' in stored.data ? <FocusCheck result={stored.data.result as SimulationResult} progress={null} /> : null}
-      {stored.data === null ? <p className="text-ink/70">This revision was exported without a focus check.</p> : null}
+      {stored.data === null ? <p className="text-ink/70" role="status">The focus check of this revision is running in the background; it appears here when it is done.</p> : null}
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { auditEvents, designs, memberships, revisions, teams, users } from '@/db
 import type { BuildStatus } from '@/db/schema';
 import type { TeamRole } from '@/lib/auth/roles';
 import type { ExportInput, ExportOutcome, ExportStore } from '@/lib/jobs/export-job';
+import type { FocusOutcome, FocusStore } from '@/lib/jobs/focus-job';
 import { loadPhaseMaps } from './designs';
 
 // Everything but the bundle bytes, so lists and pages never pull megabytes they do not show.
@@ -251,5 +252,24 @@ export const exportStore: ExportStore = {
 
   async fail(revisionId, message) {
     await markBuildFailed(revisionId, message);
+  },
+};
+
+/** The focus-check job's view: ready revisions without a cached check, and the cache itself (report.focusCheck). */
+export const focusStore: FocusStore = {
+  async load(revisionId) {
+    const [row] = await db
+      .select({ source: revisions.source, processProfile: revisions.processProfile, designId: revisions.designId })
+      .from(revisions)
+      .where(and(eq(revisions.id, revisionId), eq(revisions.buildStatus, 'ready'), sql`NOT (${revisions.report} ? 'focusCheck')`));
+    if (!row) return null;
+    return { source: row.source, processProfile: row.processProfile, phaseMaps: await loadPhaseMaps(row.designId) };
+  },
+
+  async save(revisionId, outcome: FocusOutcome) {
+    await db
+      .update(revisions)
+      .set({ report: sql`jsonb_set(${revisions.report}, '{focusCheck}', ${JSON.stringify(outcome)}::jsonb)` })
+      .where(and(eq(revisions.id, revisionId), eq(revisions.buildStatus, 'ready')));
   },
 };

@@ -3,7 +3,7 @@
  * The app only sends; scripts/worker.ts also works the queues and runs maintenance.
  */
 import PgBoss from 'pg-boss';
-import { EXPORT_DEAD_QUEUE, EXPORT_EXPIRE_SECONDS, EXPORT_QUEUE, EXPORT_RETRY_LIMIT, type ExportJobPayload } from './queues';
+import { EXPORT_DEAD_QUEUE, EXPORT_EXPIRE_SECONDS, EXPORT_QUEUE, EXPORT_RETRY_LIMIT, FOCUS_QUEUE, type ExportJobPayload } from './queues';
 
 type Holder = { boss?: Promise<PgBoss> };
 // Kept on globalThis so the dev server's module reloads reuse one connection.
@@ -13,9 +13,10 @@ const holder = globalThis as unknown as { __zonewrightBoss?: Holder };
 export interface ExportQueueNames {
   work: string;
   dead: string;
+  focus: string;
 }
 
-export const DEFAULT_EXPORT_QUEUES: ExportQueueNames = { work: EXPORT_QUEUE, dead: EXPORT_DEAD_QUEUE };
+export const DEFAULT_EXPORT_QUEUES: ExportQueueNames = { work: EXPORT_QUEUE, dead: EXPORT_DEAD_QUEUE, focus: FOCUS_QUEUE };
 
 export async function ensureExportQueues(boss: PgBoss, names: ExportQueueNames = DEFAULT_EXPORT_QUEUES): Promise<void> {
   // createQueue is idempotent; the dead-letter queue must exist before the queue that names it.
@@ -27,6 +28,8 @@ export async function ensureExportQueues(boss: PgBoss, names: ExportQueueNames =
     retryDelay: 2,
     expireInSeconds: EXPORT_EXPIRE_SECONDS,
   });
+  // A lost focus check is only a missing cache entry: no retries, no dead letters.
+  await boss.createQueue(names.focus, { name: names.focus, retryLimit: 0, expireInSeconds: EXPORT_EXPIRE_SECONDS });
 }
 
 /** Starts pg-boss once per process. `worker: true` also runs its maintenance (expiry, dead letters). */

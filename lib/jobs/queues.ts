@@ -5,6 +5,10 @@ export const EXPORT_QUEUE = 'revision-export';
 /** Receives export jobs that pg-boss gave up on (worker crash, time-out), so their revisions get marked failed. */
 export const EXPORT_DEAD_QUEUE = 'revision-export-dead';
 
+/** Runs the optical check of a revision whose bundle is stored; the result is cached in its report. */
+export const FOCUS_QUEUE = 'revision-focus-check';
+
+/** Payload of both the export and the focus-check jobs. */
 export interface ExportJobPayload {
   revisionId: string;
 }

@@ -1,6 +1,6 @@
 /**
  * Reads figures back out of a stored revision report (JSON written by the export job).
- * The stored shape is `{ mask: <export report>, focusCheck: ... }`; rows written before a field existed lack it.
+ * The stored shape is `{ mask, summary }` from the export, plus `focusCheck` once the focus-check job has run.
  */
 
 function asRecord(value: unknown): Record<string, unknown> | null {
@@ -17,7 +17,7 @@ export function reportWarnings(report: unknown): string[] {
     .filter((w): w is string => w !== null);
 }
 
-/** The stored focus-check result or its error, if the export ran one. */
+/** The cached focus-check result or its error; null while the check has not run yet. */
 export function reportFocusCheck(report: unknown): { result: unknown } | { error: string } | null {
   const check = asRecord(asRecord(report)?.focusCheck);
   if (!check) return null;

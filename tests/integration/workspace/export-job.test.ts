@@ -12,11 +12,11 @@ import { eq } from 'drizzle-orm';
 import { closeDb, db } from '@/db';
 import { designs, revisions } from '@/db/schema';
 import { createRevision, exportStore, getBundle, requeueFailed } from '@/db/queries/revisions';
-import { runExportJob } from '@/lib/jobs/export-job';
-import { threadedExporter } from '@/lib/jobs/threaded-exporter';
+import { runExportJob, type Exporter } from '@/lib/jobs/export-job';
+import { threadedTask } from '@/lib/jobs/threaded-task';
 import { makeTeam, type TestTeam } from '../review/fixtures';
 
-const exporter = threadedExporter({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), budgetMs: 3000 });
+const exporter: Exporter = threadedTask({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), exportName: 'exportRevision', budgetMs: 3000, what: 'export' });
 
 let team: TestTeam;
 beforeAll(async () => {

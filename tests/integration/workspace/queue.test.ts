@@ -8,29 +8,34 @@ import { eq } from 'drizzle-orm';
 import { closeDb, db } from '@/db';
 import { databaseUrl } from '@/db/url';
 import { designs, revisions } from '@/db/schema';
-import { createRevision, exportStore } from '@/db/queries/revisions';
+import { createRevision, exportStore, focusStore } from '@/db/queries/revisions';
+import type { FocusTask } from '@/lib/jobs/focus-job';
 import { randomUUID } from 'node:crypto';
 import { ensureExportQueues, getBoss, sendExportJob, stopBoss } from '@/lib/jobs/boss';
-import { threadedExporter } from '@/lib/jobs/threaded-exporter';
+import type { Exporter } from '@/lib/jobs/export-job';
+import { threadedTask } from '@/lib/jobs/threaded-task';
 import { DEAD_LETTER_MESSAGE, workExportQueues } from '@/lib/jobs/work-queues';
 import { makeTeam, type TestTeam } from '../review/fixtures';
 
 let team: TestTeam;
 // Queues of this file only: a worker started by scripts/test.sh works the real ones.
 const tag = randomUUID().slice(0, 8);
-const queues = { work: `revision-export-test-${tag}`, dead: `revision-export-test-${tag}-dead` };
+const queues = { work: `revision-export-test-${tag}`, dead: `revision-export-test-${tag}-dead`, focus: `revision-focus-test-${tag}` };
+// Stands in for the optics: the test is about the queue, not the simulation.
+const focusTask: FocusTask = async (input) => ({ result: { checkedSourceLength: input.source.length }, chordTolerance_um: 0.05 });
 
 beforeAll(async () => {
   team = await makeTeam();
   const boss = await getBoss(databaseUrl(), { worker: true });
-  const exporter = threadedExporter({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), budgetMs: 5000 });
+  const exporter: Exporter = threadedTask({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), exportName: 'exportRevision', budgetMs: 5000, what: 'export' });
   await ensureExportQueues(boss, queues);
-  await workExportQueues(boss, { store: exportStore, exporter, queues });
+  await workExportQueues(boss, { store: exportStore, exporter, focusStore, focusTask, queues });
 });
 afterAll(async () => {
   const boss = await getBoss(databaseUrl(), { worker: true });
   await boss.deleteQueue(queues.work);
   await boss.deleteQueue(queues.dead);
+  await boss.deleteQueue(queues.focus);
   await stopBoss();
   await closeDb();
 });
@@ -57,6 +62,16 @@ describe('export queue', () => {
     const r = await settled(id);
     expect(r.buildStatus).toBe('ready');
     expect(r.bundle?.byteLength).toBeGreaterThan(0);
+    // Then the focus check runs on its own queue and is cached in the report, the bundle untouched.
+    const until = Date.now() + 20_000;
+    let report = r.report as Record<string, unknown> | null;
+    while (!report?.focusCheck && Date.now() < until) {
+      await new Promise((resolve) => setTimeout(resolve, 200));
+      [{ report }] = (await db.select({ report: revisions.report }).from(revisions).where(eq(revisions.id, id))) as { report: Record<string, unknown> | null }[];
+    }
+    expect(report?.focusCheck).toEqual({ result: { checkedSourceLength: 5 }, chordTolerance_um: 0.05 });
+    const [after] = await db.select({ sha: revisions.bundleSha256 }).from(revisions).where(eq(revisions.id, id));
+    expect(after.sha).toBe(r.bundleSha256);
   });
 
   it('fails a refused revision through pg-boss, with no bundle', async () => {

@@ -12,14 +12,14 @@ import JSZip from 'jszip';
 import { closeDb, db } from '@/db';
 import { designs, fabPhotos, fabRuns, phaseMaps, revisions } from '@/db/schema';
 import { exportStore } from '@/db/queries/revisions';
-import { runExportJob } from '@/lib/jobs/export-job';
-import { threadedExporter } from '@/lib/jobs/threaded-exporter';
+import { runExportJob, type Exporter } from '@/lib/jobs/export-job';
+import { threadedTask } from '@/lib/jobs/threaded-task';
 import { makeRevision, makeTeam, stateOf, type TestTeam } from '../review/fixtures';
 import { jsonBody, request, signInHttp } from './fixtures/http';
 
 type Role = 'owner' | 'designer' | 'reviewer' | 'fab' | 'viewer';
 const ROLES: Role[] = ['owner', 'designer', 'reviewer', 'fab', 'viewer'];
-const exporter = threadedExporter({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), budgetMs: 5000 });
+const exporter: Exporter = threadedTask({ modulePath: path.join(__dirname, 'fixtures', 'exporters.ts'), exportName: 'exportRevision', budgetMs: 5000, what: 'export' });
 
 let team: TestTeam;
 const cookie = {} as Record<Role | 'outsider', string>;
