@@ -8,6 +8,8 @@ export interface SvgOptions {
   title?: string;
   /** drawing size (the larger side) over the smallest detail kept; default 20,000 */
   detail?: number;
+  /** about how many vertices the preview keeps in all (each cell's own polygons counted once); default 400,000 */
+  vertexBudget?: number;
 }
 
 /**
@@ -24,7 +26,7 @@ export function* svgChunks(library: LayoutLibrary, options: SvgOptions = {}): Ge
   const margin = 0.05 * Math.max(width, height);
   const font = 0.035 * Math.max(width, height);
   const styles = layerStyles(library.layers);
-  const resolution = Math.max(box.x1 - box.x0, box.y1 - box.y0) / (options.detail ?? 20_000);
+  const resolution = previewResolution(library, Math.max(box.x1 - box.x0, box.y1 - box.y0) / (options.detail ?? 20_000), options.vertexBudget ?? 400_000);
   const cellLayerId = cellLayerIds(library);
   const legendRows = library.layers.length + 2;
   const legendHeight = legendRows * font * 1.6 + margin;
@@ -107,23 +109,64 @@ function useElement(placement: LayoutPlacement, target: string): string {
 }
 
 /**
- * Path data in DBU; a vertex closer than `resolution` (DBU, in both x and y) to the last one kept is dropped,
- * since a preview is looked at, not fabricated, and this keeps very large designs small.
+ * Path data in DBU. A vertex closer than the resolution (in both x and y) to the last one kept is dropped unless
+ * the outline turns there by more than 20° (corners such as the ends of fractured ring pieces stay): a preview is
+ * looked at, not fabricated, and this keeps very large designs small.
  */
-function pathData(polygon: ArrayLike<number>, resolution: number): string {
+function pathData(polygon: ArrayLike<number>, coarsest: number): string {
+  const resolution = Math.min(coarsest, polygonSize(polygon) / 8);
+  const n = polygon.length / 2;
   let d = `M${polygon[0]} ${polygon[1]}`;
   let lastX = polygon[0];
   let lastY = polygon[1];
-  for (let i = 2; i < polygon.length; i += 2) {
-    if (Math.abs(polygon[i] - lastX) < resolution && Math.abs(polygon[i + 1] - lastY) < resolution) continue;
-    lastX = polygon[i];
-    lastY = polygon[i + 1];
-    d += `L${lastX} ${lastY}`;
+  for (let i = 1; i < n; i++) {
+    const x = polygon[2 * i];
+    const y = polygon[2 * i + 1];
+    const next = ((i + 1) % n) * 2;
+    const near = Math.abs(x - lastX) < resolution && Math.abs(y - lastY) < resolution;
+    if (near && !sharpTurn(x - lastX, y - lastY, polygon[next] - x, polygon[next + 1] - y)) continue;
+    lastX = x;
+    lastY = y;
+    d += `L${x} ${y}`;
   }
   return `${d}Z`;
 }
 
-/** Element ids by cell position, since cell names may hold characters ids may not. */
+const COS_20_DEGREES = Math.cos((20 * Math.PI) / 180);
+
+function sharpTurn(ax: number, ay: number, bx: number, by: number): boolean {
+  const lengths = Math.hypot(ax, ay) * Math.hypot(bx, by);
+  return lengths > 0 && ax * bx + ay * by < COS_20_DEGREES * lengths;
+}
+
+/**
+ * The vertex spacing (DBU) the preview keeps: the detail limit, or coarser when the outlines are so long that
+ * at that spacing they would exceed the budget (outline length / spacing ≈ vertices kept).
+ */
+function previewResolution(library: LayoutLibrary, detail: number, budget: number): number {
+  let perimeter = 0;
+  for (const cell of library.cells) {
+    for (const shapes of cell.shapes) {
+      for (const polygon of shapes.polygons) {
+        for (let i = 2; i < polygon.length; i += 2) perimeter += Math.abs(polygon[i] - polygon[i - 2]) + Math.abs(polygon[i + 1] - polygon[i - 1]);
+      }
+    }
+  }
+  return Math.max(detail, perimeter / budget);
+}
+
+/** The larger side of a polygon's bounding box; a polygon keeps its shape by never dropping vertices at 1/8 of it. */
+function polygonSize(polygon: ArrayLike<number>): number {
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (let i = 0; i < polygon.length; i += 2) {
+    x0 = Math.min(x0, polygon[i]);
+    x1 = Math.max(x1, polygon[i]);
+    y0 = Math.min(y0, polygon[i + 1]);
+    y1 = Math.max(y1, polygon[i + 1]);
+  }
+  return Math.max(x1 - x0, y1 - y0);
+}
+
 function cellLayerIds(library: LayoutLibrary): (cell: string, layer: number, datatype: number) => string {
   const index = new Map(library.cells.map((c, i) => [c.name, i]));
   return (cell, layer, datatype) => `c${index.get(cell)}-${layer}-${datatype}`;
