@@ -26,6 +26,7 @@ export interface BuiltEngine {
 export function buildEngine(design: CompiledDesign, mask: MaskModel, illumination: Illumination, options: SimulationOptions): BuiltEngine {
   const method = options.method ?? 'auto';
   const warnings: string[] = [];
+  const pieceRegions = design.pieces.map((piece) => piece.region);
   const centre = design.symmetryCentre;
   const onAxis = centre !== null && design.foci.every((f) => Math.hypot(f.x - centre.x, f.y - centre.y) <= design.wavelength);
   if (method !== 'fft-2d' && centre && onAxis) {
@@ -37,7 +38,7 @@ export function buildEngine(design: CompiledDesign, mask: MaskModel, illuminatio
       }
       const region: Box = { x0: centre.x - outer, y0: centre.y - outer, x1: centre.x + outer, y1: centre.y + outer };
       const fmax = maxFrequency(design, region);
-      const engine = createRadialEngine(mask, radial, centre, illumination, {
+      const engine = createRadialEngine(mask, radial, centre, illumination, pieceRegions, {
         method: 'radial',
         note: `exact radial (Rayleigh–Sommerfeld) integral over ${radial.inner.length} annular segments read off the polygons along ${radial.rays} rays from the symmetry centre; no 2-D grid, so no sampling limit on the zone width`,
         transitions: radial.inner.length,
@@ -56,7 +57,7 @@ export function buildEngine(design: CompiledDesign, mask: MaskModel, illuminatio
   if (plan.scaled) cropToBox(aperture, plan.grid, plan.region);
   const axis = { x: 0.5 * (plan.region.x0 + plan.region.x1), y: 0.5 * (plan.region.y0 + plan.region.y1) };
   if (plan.scaled) warnings.push(`the zones are too fine for the whole aperture on one grid: ${plan.note}; efficiencies are fractions of the light on that region and spots are wider than the full lens would give`);
-  const engine = createGridEngine(mask, plan.grid, states, aperture, illumination, axis, {
+  const engine = createGridEngine(mask, plan.grid, states, aperture, illumination, axis, pieceRegions, {
     method: plan.scaled ? 'scaled-region' : 'fft-2d',
     note: `angular spectrum on a ${plan.grid.n}² grid of ${plan.grid.pitch.toPrecision(3)} µm pixels (${plan.note}), zero-padded to twice the simulated width, polygons rasterised with area coverage`,
     gridSize: plan.grid.n,

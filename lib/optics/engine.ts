@@ -12,7 +12,12 @@ export interface OpticsEngine {
   axialIntensities(x: number, y: number, z0: number, dz: number, count: number): Float64Array;
   /** size×size intensities in plane z centred on (xc, yc), `step` apart, row-major (y rows). */
   focalMap(xc: number, yc: number, z: number, step: number, size: number): Float64Array;
-  /** |∫ t·w dA|² / P², P the power incident on the aperture: the fraction of the light carried by the wave. */
+  /**
+   * The fraction of the incident light carried by the wave: Σ_p |∫_p t·w dA|² / (P_p·P) over the design's
+   * pieces p (one piece, the whole aperture, for a plain design), P_p the light incident on piece p and P on
+   * the aperture. Per piece, so a focus served by some sectors of a multiplexed lens gets the power those
+   * sectors send it, not their overlap with a full-aperture wave.
+   */
   projectedPower(wave: IdealWave): number;
   /** Peak intensity a lossless perfect lens on the same aperture would give at (x, y, z). */
   idealPeakIntensity(x: number, y: number, z: number): number;

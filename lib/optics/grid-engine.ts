@@ -4,7 +4,9 @@ import { incidentField } from './illumination';
 import { kernelMagnitude, waveWeight, type IdealWave } from './ideal-wave';
 import { stateTransmission, type MaskModel } from './mask-model';
 import type { Grid } from './raster-coverage';
+import { pieceAt } from './region';
 import type { Illumination, Sampling } from './types';
+import type { Region } from '../design/types';
 
 /**
  * The 2-D method: the rasterised transmission (per-layer coverages and the aperture coverage) on an
@@ -25,6 +27,7 @@ export function createGridEngine(
   apertureCoverage: Float32Array,
   illumination: Illumination,
   sourceAxis: { x: number; y: number },
+  pieceRegions: Array<Region | null>,
   sampling: Sampling,
 ): OpticsEngine {
   const { n, pitch } = grid;
@@ -42,6 +45,14 @@ export function createGridEngine(
   const inc = new Float64Array(2);
   const stateValues = new Float64Array(2 * stateCoverage.length);
 
+  const pieces = pieceRegions.length;
+  const pieceOf = new Int32Array(cells);
+  if (pieces > 1) {
+    for (let j = 0; j < n; j++) {
+      for (let i = 0; i < n; i++) if (apertureCoverage[j * n + i] > 0) pieceOf[j * n + i] = pieceAt(pieceRegions, centreX(i), centreY(j));
+    }
+  }
+  const pieceIncident = new Float64Array(pieces);
   let incidentPower = 0;
   let area = 0;
   const setWavelength = (lambda: number) => {
@@ -54,6 +65,7 @@ export function createGridEngine(
     }
     incidentPower = 0;
     area = 0;
+    pieceIncident.fill(0);
     for (let j = 0; j < n; j++) {
       const dy = centreY(j) - sourceAxis.y;
       for (let i = 0; i < n; i++) {
@@ -80,7 +92,9 @@ export function createGridEngine(
         incidentField(illumination, k, dx * dx + dy * dy, inc);
         spectrum[2 * c] = tr * inc[0] - ti * inc[1];
         spectrum[2 * c + 1] = tr * inc[1] + ti * inc[0];
-        incidentPower += ap * (inc[0] * inc[0] + inc[1] * inc[1]) * pitch * pitch;
+        const incident = ap * (inc[0] * inc[0] + inc[1] * inc[1]) * pitch * pitch;
+        incidentPower += incident;
+        pieceIncident[pieceOf[c]] += incident;
         area += ap * pitch * pitch;
       }
     }
@@ -323,8 +337,8 @@ export function createGridEngine(
     projectedPower(wave: IdealWave) {
       const k = (2 * Math.PI) / wavelength;
       const t = currentTransmission();
-      let re = 0;
-      let im = 0;
+      const re = new Float64Array(pieces);
+      const im = new Float64Array(pieces);
       for (let j = 0; j < n; j++) {
         const py = centreY(j);
         const dy = py - sourceAxis.y;
@@ -347,13 +361,17 @@ export function createGridEngine(
             wr = value[0];
             wi = value[1];
           }
-          re += tr * wr - ti * wi;
-          im += tr * wi + ti * wr;
+          const piece = pieceOf[c];
+          re[piece] += tr * wr - ti * wi;
+          im[piece] += tr * wi + ti * wr;
         }
       }
-      re *= pitch * pitch;
-      im *= pitch * pitch;
-      return (re * re + im * im) / (incidentPower * incidentPower);
+      let total = 0;
+      const area2 = pitch ** 4;
+      for (let piece = 0; piece < pieces; piece++) {
+        if (pieceIncident[piece] > 0) total += ((re[piece] ** 2 + im[piece] ** 2) * area2) / (pieceIncident[piece] * incidentPower);
+      }
+      return total;
     },
     idealPeakIntensity(x, y, z) {
       const k = (2 * Math.PI) / wavelength;

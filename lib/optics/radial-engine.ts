@@ -4,13 +4,29 @@ import { kernelMagnitude, waveWeight, type IdealWave } from './ideal-wave';
 import { stateTransmission, type MaskModel } from './mask-model';
 import type { RadialMask } from './radial-mask';
 import { radialField, radialProjection, type RadialTransmission } from './radial-field';
+import { pieceAt } from './region';
 import type { Illumination, Sampling } from './types';
+import type { Region } from '../design/types';
 
 /** The radial method: exact 1-D integrals over the annular segments read off a symmetric mask. */
-export function createRadialEngine(mask: MaskModel, radial: RadialMask, centre: { x: number; y: number }, illumination: Illumination, sampling: Sampling): OpticsEngine {
+export function createRadialEngine(
+  mask: MaskModel,
+  radial: RadialMask,
+  centre: { x: number; y: number },
+  illumination: Illumination,
+  pieceRegions: Array<Region | null>,
+  sampling: Sampling,
+): OpticsEngine {
   const segments = radial.inner.length;
   const t: RadialTransmission = { inner: radial.inner, outer: radial.outer, tRe: new Float64Array(segments), tIm: new Float64Array(segments) };
   const open: RadialTransmission = { ...t, tRe: new Float64Array(segments).fill(1), tIm: new Float64Array(segments) };
+  // the segments of each piece (by its midpoint), for per-piece projections
+  const pieceOf = Int32Array.from({ length: segments }, (_, s) => pieceAt(pieceRegions, centre.x + 0.5 * (radial.inner[s] + radial.outer[s]), centre.y));
+  const subset = (of: RadialTransmission, piece: number): RadialTransmission => {
+    const keep = [...pieceOf.keys()].filter((s) => pieceOf[s] === piece);
+    const pick = (a: Float64Array) => Float64Array.from(keep, (s) => a[s]);
+    return { inner: pick(of.inner), outer: pick(of.outer), tRe: pick(of.tRe), tIm: pick(of.tIm) };
+  };
   let wavelength = mask.designWavelength;
   const value = new Float64Array(2);
   const setWavelength = (lambda: number) => {
@@ -39,6 +55,7 @@ export function createRadialEngine(mask: MaskModel, radial: RadialMask, centre: 
     out[1] = 0;
   };
   const incidentPower = power(incidentIntensity, () => 0, open).re;
+  const pieceIncident = pieceRegions.map((_, piece) => power(incidentIntensity, () => 0, subset(open, piece)).re);
   let area = 0;
   for (let s = 0; s < segments; s++) area += Math.PI * (radial.outer[s] ** 2 - radial.inner[s] ** 2);
 
@@ -76,8 +93,14 @@ export function createRadialEngine(mask: MaskModel, radial: RadialMask, centre: 
       const kk = k();
       const span = (a: number, b: number) =>
         Math.abs(wave.phasePerLength) * Math.abs(Math.hypot(b, wave.z) - Math.hypot(a, wave.z)) + (wave.withIncidentPhase ? incidentPhaseSpan(illumination, kk, a, b) : 0);
-      const p = power((r, out) => waveWeight(wave, illumination, kk, centre.x + r, centre.y, r * r, out), span, t);
-      return (p.re * p.re + p.im * p.im) / (incidentPower * incidentPower);
+      const weight = (r: number, out: Float64Array) => waveWeight(wave, illumination, kk, centre.x + r, centre.y, r * r, out);
+      let total = 0;
+      pieceRegions.forEach((_, piece) => {
+        if (pieceIncident[piece] === 0) return;
+        const p = power(weight, span, pieceRegions.length === 1 ? t : subset(t, piece));
+        total += (p.re * p.re + p.im * p.im) / (pieceIncident[piece] * incidentPower);
+      });
+      return total;
     },
     idealPeakIntensity(x, y, z) {
       const kk = k();

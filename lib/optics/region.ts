@@ -140,3 +140,14 @@ function dropEmpty(flat: number[]): number[] {
   for (let i = 0; i < flat.length; i += 2) if (flat[i + 1] > flat[i]) out.push(flat[i], flat[i + 1]);
   return out;
 }
+
+/** Index of the design piece whose region holds (x, y): pieces with a region first, a piece without one takes the rest. */
+export function pieceAt(regions: Array<Region | null>, x: number, y: number): number {
+  let fallback = 0;
+  for (let p = 0; p < regions.length; p++) {
+    const region = regions[p];
+    if (region === null) fallback = p;
+    else if (regionContains(region, x, y)) return p;
+  }
+  return fallback;
+}

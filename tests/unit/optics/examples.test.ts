@@ -52,6 +52,22 @@ describe('examples/four-level-lens.zw', () => {
   });
 });
 
+describe('examples/bifocal-multiplexed.zw', () => {
+  it('gives each focus the 1/π² share of the half of the aperture its sectors cover', { timeout: 600_000 }, () => {
+    // each lens is a 50 % binary amplitude zone plate over half the aperture (4 of 8 sectors):
+    // 1/π² of half the light, 1/(2π²) ≈ 5.07 % (Goodman; Attwood ch. 9, applied per sector); its peak is a quarter
+    // of a full lens's (half the amplitude), which peakRatio reports
+    const design = compileExample('bifocal-multiplexed.zw');
+    const { library } = buildMask(design, defaultMaskOptions());
+    const result = simulateMask(design, library, { band: { from_um: 0.404, to_um: 0.406, samples: 2 } });
+    for (const focus of result.foci) {
+      expect(Math.abs(focus.efficiency * 2 * Math.PI ** 2 - 1)).toBeLessThan(0.03);
+      expect(Math.abs(focus.peakRatio * 4 * Math.PI ** 2 - 1)).toBeLessThan(0.05);
+      expect(Math.abs(focus.found_um[2] - focus.designed_um[2]) / focus.designed_um[2]).toBeLessThan(0.002);
+    }
+  });
+});
+
 /**
  * What the fabricated two-focus element should give. The mask is t = exp(iπ·s) with s = 1 where
  * Re(u·e^{−iθ0}) > cos(π·duty)·|u|, u = w1·e^{iφ1} + w2·e^{iφ2} (lib/design/types.ts). Over an aperture
