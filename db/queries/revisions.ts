@@ -13,6 +13,11 @@ const { bundle: _bundle, ...summaryColumns } = getTableColumns(revisions);
 
 export type RevisionSummary = Omit<typeof revisions.$inferSelect, 'bundle'> & { authorName: string | null };
 
+// The history needs neither the reports nor the manifests (tens to hundreds of kB each once checked).
+const { report: _report, manifest: _manifest, parameters: _parameters, ...listColumns } = summaryColumns;
+
+export type RevisionListItem = Omit<RevisionSummary, 'report' | 'manifest' | 'parameters'>;
+
 export interface NewRevision {
   designId: string;
   authorId: string;
@@ -114,10 +119,10 @@ export async function getRevisionForUser(revisionId: string, userId: string): Pr
   return r ? { ...r, role: r.role ?? null } : null;
 }
 
-/** Every revision of a design, newest first, without bundle bytes. */
-export async function listRevisions(designId: string): Promise<RevisionSummary[]> {
+/** Every revision of a design, newest first, without bundle bytes, reports or manifests. */
+export async function listRevisions(designId: string): Promise<RevisionListItem[]> {
   return db
-    .select({ ...summaryColumns, authorName: users.name })
+    .select({ ...listColumns, authorName: users.name })
     .from(revisions)
     .leftJoin(users, eq(users.id, revisions.authorId))
     .where(eq(revisions.designId, designId))
