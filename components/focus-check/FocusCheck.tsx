@@ -64,7 +64,7 @@ function Results({ result }: { result: SimulationResult }) {
       </p>
       {result.warnings.map((w) => (
         <Notice key={w} tone="warning">
-          {w}
+          {w.charAt(0).toUpperCase() + w.slice(1)}.
         </Notice>
       ))}
       <FociTable result={result} />
@@ -160,13 +160,8 @@ function OrdersTable({ result }: { result: SimulationResult }) {
 
 function AxialPlot({ result }: { result: SimulationResult }) {
   const [logScale, setLogScale] = useState(true);
-  const rows = result.axial.z_um.map((z, i) => {
-    const row: Record<string, number> = { z };
-    result.axialScans.forEach((scan) => {
-      row[`focus${scan.focusIndex + 1}`] = Math.max(scan.intensity[i], 1e-6);
-    });
-    return row;
-  });
+  // each axis has its own z samples (z/6 … 1.6 z of its focus), so each line carries its own points
+  const lines = result.axialScans.map((scan) => ({ scan, points: scan.z_um.map((z, i) => ({ z, intensity: Math.max(scan.intensity[i], 1e-6) })) }));
   return (
     <Panel
       title="Intensity along each focus axis"
@@ -185,14 +180,14 @@ function AxialPlot({ result }: { result: SimulationResult }) {
     >
       <div className="h-72">
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 24, left: 16 }}>
+          <LineChart margin={{ top: 8, right: 16, bottom: 24, left: 24 }}>
             <CartesianGrid stroke="#d9d6cc" strokeDasharray="2 4" />
-            <XAxis dataKey="z" type="number" domain={['dataMin', 'dataMax']} tickFormatter={(v: number) => v.toFixed(0)} label={{ value: 'distance behind the mask z (µm)', position: 'insideBottom', offset: -12 }} />
-            <YAxis scale={logScale ? 'log' : 'linear'} domain={logScale ? [1e-3, 'auto'] : [0, 'auto']} allowDataOverflow tickFormatter={(v: number) => v.toPrecision(2)} label={{ value: 'I / I incident', angle: -90, position: 'insideLeft' }} />
+            <XAxis dataKey="z" type="number" allowDuplicatedCategory={false} domain={['dataMin', 'dataMax']} tickFormatter={(v: number) => v.toFixed(0)} label={{ value: 'distance behind the mask z (µm)', position: 'insideBottom', offset: -12 }} />
+            <YAxis width={64} scale={logScale ? 'log' : 'linear'} domain={logScale ? [1e-3, 'auto'] : [0, 'auto']} allowDataOverflow tickFormatter={(v: number) => v.toPrecision(2)} label={{ value: 'I / I incident', angle: -90, position: 'left', offset: 4 }} />
             <Tooltip formatter={(v) => (typeof v === 'number' ? v.toPrecision(4) : String(v))} labelFormatter={(z) => `z = ${Number(z).toFixed(1)} µm`} />
             <Legend verticalAlign="top" />
-            {result.axialScans.map((scan) => (
-              <Line key={scan.focusIndex} dataKey={`focus${scan.focusIndex + 1}`} name={`axis of focus ${scan.focusIndex + 1}`} dot={false} isAnimationActive={false} stroke={FOCUS_HUES[scan.focusIndex % FOCUS_HUES.length]} strokeWidth={1} />
+            {lines.map(({ scan, points }) => (
+              <Line key={scan.focusIndex} data={points} dataKey="intensity" name={`axis of focus ${scan.focusIndex + 1}`} dot={false} isAnimationActive={false} stroke={FOCUS_HUES[scan.focusIndex % FOCUS_HUES.length]} strokeWidth={1} />
             ))}
             {result.orders
               .filter((o) => o.z_um !== null && o.order > 0)
@@ -220,10 +215,10 @@ function ChromaticPlot({ result }: { result: SimulationResult }) {
     >
       <div className="h-64">
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 24, left: 16 }}>
+          <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 24, left: 24 }}>
             <CartesianGrid stroke="#d9d6cc" strokeDasharray="2 4" />
             <XAxis dataKey="nm" type="number" domain={['dataMin', 'dataMax']} tickFormatter={(v: number) => v.toFixed(0)} label={{ value: 'wavelength (nm)', position: 'insideBottom', offset: -12 }} />
-            <YAxis domain={['auto', 'auto']} tickFormatter={(v: number) => v.toFixed(0)} label={{ value: 'focus z (µm)', angle: -90, position: 'insideLeft' }} />
+            <YAxis width={64} domain={['auto', 'auto']} tickFormatter={(v: number) => v.toFixed(0)} label={{ value: 'focus z (µm)', angle: -90, position: 'left', offset: 4 }} />
             <Tooltip formatter={(v) => (typeof v === 'number' ? `${v.toFixed(1)} µm` : String(v))} labelFormatter={(nm) => `λ = ${Number(nm).toFixed(1)} nm`} />
             <Legend verticalAlign="top" />
             <Line dataKey="found" name="simulated focus" stroke="#14213d" dot isAnimationActive={false} />

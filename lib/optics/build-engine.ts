@@ -40,7 +40,7 @@ export function buildEngine(design: CompiledDesign, mask: MaskModel, illuminatio
       const fmax = maxFrequency(design, region);
       const engine = createRadialEngine(mask, radial, centre, illumination, pieceRegions, {
         method: 'radial',
-        note: `exact radial (Rayleigh–Sommerfeld) integral over ${radial.inner.length} annular segments read off the polygons along ${radial.rays} rays from the symmetry centre; no 2-D grid, so no sampling limit on the zone width`,
+        note: `Exact radial (Rayleigh–Sommerfeld) integral over ${radial.inner.length} annular segments read off the polygons along ${radial.rays} rays from the symmetry centre; no 2-D grid, so no sampling limit on the zone width`,
         transitions: radial.inner.length,
         region_um: region,
         maxSpatialFrequency_per_um: fmax,
@@ -59,7 +59,7 @@ export function buildEngine(design: CompiledDesign, mask: MaskModel, illuminatio
   if (plan.scaled) warnings.push(`the zones are too fine for the whole aperture on one grid: ${plan.note}; efficiencies are fractions of the light on that region and spots are wider than the full lens would give`);
   const engine = createGridEngine(mask, plan.grid, states, aperture, illumination, axis, pieceRegions, {
     method: plan.scaled ? 'scaled-region' : 'fft-2d',
-    note: `angular spectrum on a ${plan.grid.n}² grid of ${plan.grid.pitch.toPrecision(3)} µm pixels (${plan.note}), zero-padded to twice the simulated width, polygons rasterised with area coverage`,
+    note: `Angular spectrum on a ${plan.grid.n}² grid of ${plan.grid.pitch.toPrecision(3)} µm pixels (${plan.note}), zero-padded to twice the simulated width, polygons rasterised with area coverage`,
     gridSize: plan.grid.n,
     pitch_um: plan.grid.pitch,
     region_um: plan.region,
