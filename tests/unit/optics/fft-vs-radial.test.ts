@@ -55,6 +55,19 @@ describe.each([
   });
 });
 
+describe('point-source illumination on both methods', () => {
+  it('images a source 20 mm away at the same thin-lens distance with the same efficiency', () => {
+    // thin-lens equation 1/z' = 1/f − 1/s (from memory); both methods carry the same spherical incident wave
+    const design = lensDesign({ wavelength: lambda, focal, radius, quantization: binaryAmplitude });
+    const options = { illumination: { kind: 'point' as const, distance_um: 20000 }, band: { from_um: 0.499, to_um: 0.501, samples: 2 } };
+    const radial = simulateMask(design, ringLibrary([binaryRings(lambda, focal, radius)], 'zones'), { ...options, method: 'radial' });
+    const grid = simulateMask(design, ringLibrary([binaryRings(lambda, focal, radius)], 'zones'), { ...options, method: 'fft-2d' });
+    const image = 1 / (1 / focal - 1 / 20000);
+    for (const r of [radial, grid]) expect(Math.abs(r.foci[0].found_um[2] - image) / image).toBeLessThan(0.003);
+    expect(Math.abs(grid.foci[0].efficiency - radial.foci[0].efficiency) / radial.foci[0].efficiency).toBeLessThan(0.015);
+  });
+});
+
 describe('off-axis lens on the 2-D grid', () => {
   it('finds the focus at the lens centre, 40 µm off the aperture centre, with 1/π² efficiency', () => {
     // an off-axis zone plate is a decentred part of an on-axis one: same order efficiencies (Goodman, as above)
