@@ -116,7 +116,7 @@ export function simulateMask(design: CompiledDesign, library: LayoutLibrary, opt
 
 function checkInputs(design: CompiledDesign, illumination: Illumination): void {
   if (!(design.wavelength > 0) || !Number.isFinite(design.wavelength)) throw new Error('the design wavelength must be a positive length');
-  if (design.foci.length === 0) throw new Error('the design declares no focus, so there is nothing to check');
+  if (design.foci.length === 0) throw new Error('the design declares no focus, so there is nothing to check (line foci, as of an axicon, are not analysed yet)');
   design.foci.forEach((f, i) => {
     if (!(f.z > 0) || !Number.isFinite(f.z)) throw new Error(`focus ${i + 1} must lie behind the mask (z > 0)`);
   });
