@@ -105,8 +105,8 @@ export function PhaseMapsPanel({
               void upload(new FormData(e.currentTarget));
             }}
           >
-            <Field label="Name in the script" hint="Letters, digits and _">
-              {(p) => <TextInput {...p} name="name" required pattern="[A-Za-z_][A-Za-z0-9_]{0,63}" />}
+            <Field label="Name in the script" hint={'Letters, digits, _ and -; used as phase_map("name")'}>
+              {(p) => <TextInput {...p} name="name" required pattern="[A-Za-z_][A-Za-z0-9_\-]{0,63}" />}
             </Field>
             <Field label="Format">
               {(p) => (

@@ -105,10 +105,10 @@ export const saveRevisionSchema = z.object({
 });
 export type SaveRevisionInput = z.infer<typeof saveRevisionSchema>;
 
-/** A name the script can use to refer to the map: a letter or underscore, then letters, digits, underscores. */
+/** The name the script passes to phase_map("…"): a letter or _, then letters, digits, _ or -. */
 export const phaseMapNameSchema = z
   .string()
-  .regex(/^[A-Za-z_][A-Za-z0-9_]{0,63}$/, 'A phase-map name starts with a letter or _ and holds only letters, digits and _ (at most 64).');
+  .regex(/^[A-Za-z_][A-Za-z0-9_-]{0,63}$/, 'A phase-map name starts with a letter or _ and holds only letters, digits, _ and - (at most 64).');
 
 /** The form fields that come with an uploaded phase-map file (multipart, so numbers arrive as text). */
 export const phaseMapFieldsSchema = z.object({
