@@ -149,11 +149,17 @@ function OrdersTable({ result }: { result: SimulationResult }) {
               <td className="py-1 pr-4">{o.focusIndex === null ? '—' : o.focusIndex + 1}</td>
               <td className="py-1 pr-4">{micro(o.expectedZ_um, 1)}</td>
               <td className="py-1 pr-4">{micro(o.z_um, 1)}</td>
-              <td className="py-1">{percent(o.efficiency)}</td>
+              <td className="py-1">
+                {percent(o.efficiency)}
+                {o.resolved ? null : <span className="font-sans text-xs text-warning"> finer than the grid resolves</span>}
+              </td>
             </tr>
           ))}
         </tbody>
       </table>
+      {result.orders.some((o) => !o.resolved) ? (
+        <p className="mt-2 text-xs text-ink/70">Orders marked as finer than the grid have zone frequencies above the 2-D grid’s Nyquist limit; their figures are aliased.</p>
+      ) : null}
     </Panel>
   );
 }

@@ -47,7 +47,9 @@ export function simulateMask(design: CompiledDesign, library: LayoutLibrary, opt
   const axialScans: AxialScan[] = [];
   const foci: FocusResult[] = [];
   const focalMaps: FocalMap[] = [];
-  const orders: OrderResult[] = [{ order: 0, focusIndex: null, expectedZ_um: null, z_um: null, efficiency: engine.projectedPower({ x: axis.x, y: axis.y, z: 1, phasePerLength: 0, withIncidentPhase: false }) }];
+  const orders: OrderResult[] = [{ order: 0, focusIndex: null, expectedZ_um: null, z_um: null, efficiency: engine.projectedPower({ x: axis.x, y: axis.y, z: 1, phasePerLength: 0, withIncidentPhase: false }), resolved: true }];
+  const { pitch_um, maxSpatialFrequency_per_um } = engine.sampling;
+  const resolved = (m: number) => pitch_um === undefined || Math.abs(m) * maxSpatialFrequency_per_um <= 1 / (2 * pitch_um);
   const steps = design.foci.length;
 
   design.foci.forEach((focus, index) => {
@@ -86,12 +88,12 @@ export function simulateMask(design: CompiledDesign, library: LayoutLibrary, opt
     for (const m of ORDERS) {
       const efficiency = engine.projectedPower({ x: focus.x, y: focus.y, z: focus.z, phasePerLength: m * k0, withIncidentPhase: false });
       if (m < 0) {
-        orders.push({ order: m, focusIndex: index, expectedZ_um: focus.z / m, z_um: null, efficiency });
+        orders.push({ order: m, focusIndex: index, expectedZ_um: focus.z / m, z_um: null, efficiency, resolved: resolved(m) });
         continue;
       }
       const [ox, oy, oz] = expectedFor(focus.x, focus.y, focus.z / m);
       const z = m === 1 ? peakZ.z : efficiency < FAINT_ORDER ? null : scanPeak(engine, ox, oy, 0.85 * oz, 1.15 * oz).z;
-      orders.push({ order: m, focusIndex: index, expectedZ_um: oz, z_um: z, efficiency });
+      orders.push({ order: m, focusIndex: index, expectedZ_um: oz, z_um: z, efficiency, resolved: resolved(m) });
     }
     progress(0.1 + (0.6 * (index + 1)) / steps);
   });

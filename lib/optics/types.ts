@@ -64,6 +64,8 @@ export interface OrderResult {
   z_um: number | null;
   /** fraction of the incident light carried by the wave exp(i·m·φ_focus), φ_focus the focus's ideal lens phase */
   efficiency: number;
+  /** false when the order's zone frequencies (|m|·f_max) exceed the 2-D grid's Nyquist limit: its figures are then aliased */
+  resolved: boolean;
 }
 
 export interface AxialScan {

@@ -117,7 +117,7 @@ export function formatTable(name: string, r: SimulationResult): string {
   lines.push('orders               focus  expected z (µm)  found z (µm)  efficiency');
   for (const o of r.orders) {
     const label = o.order === 0 ? 'zero' : o.order < 0 ? `${o.order} (virtual)` : `+${o.order}`;
-    lines.push(`  ${label.padEnd(18)} ${(o.focusIndex === null ? '—' : String(o.focusIndex + 1)).padEnd(6)} ${um(o.expectedZ_um, 1).padStart(15)}  ${um(o.z_um, 1).padStart(12)}  ${pct(o.efficiency).padStart(10)}`);
+    lines.push(`  ${label.padEnd(18)} ${(o.focusIndex === null ? '—' : String(o.focusIndex + 1)).padEnd(6)} ${um(o.expectedZ_um, 1).padStart(15)}  ${um(o.z_um, 1).padStart(12)}  ${pct(o.efficiency).padStart(10)}${o.resolved ? '' : '  (finer than the grid resolves: aliased)'}`);
   }
   lines.push('');
   lines.push(`chromatic shift of focus ${r.chromatic.focusIndex + 1}   λ (nm)   focus z (µm)   f0·λ0/λ (µm)`);

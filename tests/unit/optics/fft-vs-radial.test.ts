@@ -22,6 +22,10 @@ describe.each([
     expect(radial.sampling.method).toBe('radial');
     expect(grid.sampling.method).toBe('fft-2d');
     expect(grid.sampling.pitch_um as number).toBeLessThanOrEqual(1 / (2 * grid.sampling.maxSpatialFrequency_per_um));
+    // the 5th order's zones (5·f_max) are finer than the grid's Nyquist limit and are flagged; the radial method has no limit
+    expect(grid.orders.find((o) => o.order === 5)?.resolved).toBe(false);
+    expect(grid.orders.find((o) => o.order === 3)?.resolved).toBe(true);
+    expect(radial.orders.every((o) => o.resolved)).toBe(true);
   });
 
   it('gives the same axial scan', () => {
