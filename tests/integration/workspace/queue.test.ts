@@ -31,11 +31,8 @@ beforeAll(async () => {
   await ensureExportQueues(boss, queues);
   await workExportQueues(boss, { store: exportStore, exporter, focusStore, focusTask, queues });
 });
+// The private queues stay behind, empty; the test database is recreated on every run.
 afterAll(async () => {
-  const boss = await getBoss(databaseUrl(), { worker: true });
-  await boss.deleteQueue(queues.work);
-  await boss.deleteQueue(queues.dead);
-  await boss.deleteQueue(queues.focus);
   await stopBoss();
   await closeDb();
 });
