@@ -1,11 +1,11 @@
 /**
  * The geometry difference between two revisions' masks, per layer: areas added and removed (µm²)
- * from the geometry engine's XOR, and the changed regions as µm polygons for the overlay, cut to
+ * from the geometry engine's XOR (run tile by tile, see tiled-xor.ts), and the changed regions as µm polygons for the overlay, cut to
  * a vertex budget so a change touching every zone still draws quickly (the areas stay complete).
  */
-import { xorLayers } from '../geometry';
 import type { LayoutLibrary } from '../layout/types';
 import { flatLibrary } from './flat-library';
+import { tiledXor } from './tiled-xor';
 
 export interface LayerDifference {
   layer: number;
@@ -104,7 +104,7 @@ export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, 
     }
     return out;
   };
-  const layers = xorLayers(a, b).perLayer.map((l) => ({
+  const layers = tiledXor(a, b).map((l) => ({
     layer: l.layer,
     datatype: l.datatype,
     name: layerName(options.layerNames, l.layer, l.datatype),

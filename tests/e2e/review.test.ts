@@ -29,6 +29,8 @@ afterAll(async () => {
 async function personPage(email: string): Promise<Page> {
   const browser = await launchBrowser();
   opened.push(browser);
+  // this story waits on exports and the editor bundle; give a busy machine more than the usual 20 s
+  browser.context.setDefaultTimeout(60_000);
   const page = await browser.newPage();
   await signIn(page, email);
   return page;
@@ -50,6 +52,11 @@ async function waitForBundle(page: Page, revisionId: string): Promise<void> {
     if (Date.now() > deadline) throw new Error(`the export of ${revisionId} did not finish in 3 minutes (${revision.buildStatus})`);
     await new Promise((r) => setTimeout(r, 1000));
   }
+}
+
+/** Waits for a page or the server to catch up (vitest's own poll gives up after one second). */
+function eventually<T>(read: () => T | Promise<T>) {
+  return expect.poll(read, { timeout: 60_000, interval: 250 });
 }
 
 async function confirmMove(page: Page, label: string): Promise<void> {
@@ -97,15 +104,15 @@ describe('review, release and fabrication in the browser', () => {
 
     await page.goto(`/revisions/${r2.id}`);
     await confirmMove(page, 'Request review');
-    await expect.poll(() => page.getByTestId('revision-page').locator('h1').innerText()).toContain('in review');
-  });
+    await eventually(() => page.getByTestId('revision-page').locator('h1').innerText()).toContain('in review');
+  }, 420_000);
 
   it('the reviewer compares 1 and 2, comments on a line, approves and releases to fab', async () => {
     const page = await personPage('reviewer@example.com');
     await page.goto(`/compare?a=${ids.r1}&b=${ids.r2}`);
     const diff = page.getByTestId('script-diff');
-    await expect.poll(() => diff.innerText()).toMatch(/\+1\s+−1 lines/);
-    await diff.locator('.monaco-diff-editor').first().waitFor();
+    await eventually(() => diff.innerText()).toMatch(/\+1\s+−1 lines/);
+    await diff.locator('.monaco-diff-editor').first().waitFor({ timeout: 120_000 });
     const added = page.getByTestId('xor-table').getByTestId('added-area').first();
     await added.waitFor({ timeout: 60_000 });
     const addedArea = Number((await added.innerText()).replace(/[^0-9.]/g, ''));
@@ -118,23 +125,23 @@ describe('review, release and fabrication in the browser', () => {
     await page.goto(`/revisions/${ids.r2}`);
     await page.getByTestId('script-lines').getByRole('button', { name: '11', exact: true }).click();
     const composer = page.getByRole('form', { name: 'New comment' });
-    await expect.poll(() => composer.getByLabel('Line number').inputValue()).toBe('11');
+    await eventually(() => composer.getByLabel('Line number').inputValue()).toBe('11');
     await composer.getByRole('textbox', { name: 'Comment' }).fill('Near focus now 900 µm; @fab please check the outer zones after exposure.');
     await composer.getByRole('button', { name: 'Post comment' }).click();
     const comment = page.getByTestId('comment').filter({ hasText: 'please check the outer zones' });
     await comment.getByRole('button', { name: 'line 11' }).waitFor();
-    await expect.poll(() => comment.getAttribute('id')).toMatch(/^comment-[0-9a-f-]{36}$/);
+    await eventually(() => comment.getAttribute('id')).toMatch(/^comment-[0-9a-f-]{36}$/);
 
     await confirmMove(page, 'Approve');
-    await expect.poll(() => page.getByTestId('revision-page').locator('h1').innerText()).toContain('approved');
+    await eventually(() => page.getByTestId('revision-page').locator('h1').innerText()).toContain('approved');
     await confirmMove(page, 'Release to fab');
-    await expect.poll(() => page.getByTestId('revision-page').locator('h1').innerText()).toContain('released to fab');
-  });
+    await eventually(() => page.getByTestId('revision-page').locator('h1').innerText()).toContain('released to fab');
+  }, 240_000);
 
   it('fab staff download the bundle, check every checksum and record a run with a photo', async () => {
     const page = await personPage('fab@example.com');
     await page.goto('/fab');
-    const item = page.locator('[data-testid^="fab-item-"]').filter({ hasText: designName });
+    const item = page.locator('[data-testid^="fab-item-"]').filter({ has: page.locator(`a[href="/revisions/${ids.r2}"]`) });
     const shown = (await item.getByTestId('fab-sha256').innerText()).trim();
     const [download] = await Promise.all([page.waitForEvent('download'), item.getByRole('link', { name: /Download/ }).click()]);
     const zipBytes = await readFile((await download.path())!);
@@ -159,17 +166,16 @@ describe('review, release and fabrication in the browser', () => {
     await form.getByLabel('Inspection photos').setInputFiles({ name: 'first-exposure.png', mimeType: 'image/png', buffer: PNG.sync.write(png) });
     await form.getByRole('button', { name: 'Record run' }).click();
     await page.locator('[data-testid="fab-run"]').first().waitFor();
-    await expect
-      .poll(async () => (await api<{ revision: { state: string } }>(page, 'GET', `/api/revisions/${ids.r2}`)).revision.state)
+    await eventually(async () => (await api<{ revision: { state: string } }>(page, 'GET', `/api/revisions/${ids.r2}`)).revision.state)
       .toBe('fabricated');
-  });
+  }, 180_000);
 
   it('the mailbox holds the review request, the approval, the release and the mention', async () => {
     const title = `revision 2 of ${designName}`;
-    await expect.poll(() => mailFor('reviewer@example.com')).toContain(`Review requested: ${title}`);
+    await eventually(() => mailFor('reviewer@example.com')).toContain(`Review requested: ${title}`);
     expect(await mailFor('designer@example.com')).toContain(`Approved: ${title}`);
     const fab = await mailFor('fab@example.com');
     expect(fab).toContain(`Released to fab: ${title}`);
     expect(fab.some((s) => s.endsWith(`mentioned you on ${title}`))).toBe(true);
-  });
+  }, 60_000);
 });
