@@ -174,6 +174,10 @@ export function MaskView({
       // The label goes to the left of the ring when it would run off the right edge.
       const textWidth = ctx.measureText(text).width;
       const tx = mx + r + 4 + textWidth > size.width ? mx - r - 4 - textWidth : mx + r + 4;
+      // A paper backing keeps the label legible over dense zones.
+      ctx.fillStyle = 'rgba(247, 247, 242, 0.9)';
+      ctx.fillRect(tx - 2, my - 15, textWidth + 4, 15);
+      ctx.fillStyle = WARNING;
       ctx.fillText(text, tx, my - 4);
     }
     for (const p of pins) {
@@ -296,8 +300,8 @@ export function MaskView({
           </button>
         )}
         <span className="ml-auto flex items-center gap-3 text-xs">
-          <Swatch colour={CHROME} label="chrome" />
-          <Swatch colour={OPEN} label="open" />
+          <Swatch colour={polygonsAre === 'chrome' ? CHROME : OPEN} label={`${layers[0]?.name ?? 'polygons'} (drawn)`} />
+          <Swatch colour={polygonsAre === 'chrome' ? OPEN : CHROME} label="not drawn" />
           {layers.slice(1).map((l) => (
             <Swatch key={l.name} colour={l.colour} label={l.name} />
           ))}
