@@ -10,6 +10,7 @@ export interface NavItem {
 /** The app's navigation, in order. The (app) layout filters it through `can`. */
 export const NAV_ITEMS: NavItem[] = [
   { href: '/desk', label: 'Desk', anyOf: [] },
+  { href: '/designs', label: 'Designs', anyOf: ['design.view'] },
   { href: '/desk/new', label: 'New design', anyOf: ['design.create'] },
   { href: '/fab', label: 'Fab queue', anyOf: ['revision.release', 'fabRun.record'] },
   { href: '/team', label: 'Team', anyOf: ['team.view'] },

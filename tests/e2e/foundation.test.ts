@@ -10,11 +10,11 @@ import { APP_URL, launchBrowser, navLabels, signIn, type Browser } from './brows
 // Written out by hand from the authorization table: Fab queue for those who release or record fab
 // runs, New design for those who create designs; the rest for every member.
 const EXPECTED_NAV: Record<string, string[]> = {
-  owner: ['Desk', 'New design', 'Fab queue', 'Team', 'Language reference', 'Mailbox', 'Settings'],
-  designer: ['Desk', 'New design', 'Team', 'Language reference', 'Mailbox', 'Settings'],
-  reviewer: ['Desk', 'Fab queue', 'Team', 'Language reference', 'Mailbox', 'Settings'],
-  fab: ['Desk', 'Fab queue', 'Team', 'Language reference', 'Mailbox', 'Settings'],
-  viewer: ['Desk', 'Team', 'Language reference', 'Mailbox', 'Settings'],
+  owner: ['Desk', 'Designs', 'New design', 'Fab queue', 'Team', 'Language reference', 'Mailbox', 'Settings'],
+  designer: ['Desk', 'Designs', 'New design', 'Team', 'Language reference', 'Mailbox', 'Settings'],
+  reviewer: ['Desk', 'Designs', 'Fab queue', 'Team', 'Language reference', 'Mailbox', 'Settings'],
+  fab: ['Desk', 'Designs', 'Fab queue', 'Team', 'Language reference', 'Mailbox', 'Settings'],
+  viewer: ['Desk', 'Designs', 'Team', 'Language reference', 'Mailbox', 'Settings'],
 };
 const ROLE_TAG: Record<string, string> = { owner: 'Owner', designer: 'Designer', reviewer: 'Reviewer', fab: 'Fab', viewer: 'Viewer' };
 
