@@ -9,17 +9,18 @@ import { createHash, randomUUID } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import JSZip from 'jszip';
 import { PNG } from 'pngjs';
-import { sql } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { Page } from 'playwright-core';
 import { afterAll, describe, expect, it } from 'vitest';
 import { closeDb, db } from '@/db';
-import { capturedMail } from '@/db/schema';
+import { capturedMail, fabPhotos, fabRuns } from '@/db/schema';
 import { launchBrowser, signIn, type Browser } from './browser';
 
 const tag = randomUUID().slice(0, 6);
 const designName = `Review story ${tag}`;
 const opened: Browser[] = [];
 const ids: { design?: string; r1?: string; r2?: string } = {};
+let fabPage: Page | undefined;
 
 afterAll(async () => {
   for (const b of opened) await b.close();
@@ -140,6 +141,7 @@ describe('review, release and fabrication in the browser', () => {
 
   it('fab staff download the bundle, check every checksum and record a run with a photo', async () => {
     const page = await personPage('fab@example.com');
+    fabPage = page;
     await page.goto('/fab');
     const item = page.locator('[data-testid^="fab-item-"]').filter({ has: page.locator(`a[href="/revisions/${ids.r2}"]`) });
     const shown = (await item.getByTestId('fab-sha256').innerText()).trim();
@@ -165,9 +167,14 @@ describe('review, release and fabrication in the browser', () => {
     await form.getByLabel('Resist thickness (µm)').fill('0.8');
     await form.getByLabel('Inspection photos').setInputFiles({ name: 'first-exposure.png', mimeType: 'image/png', buffer: PNG.sync.write(png) });
     await form.getByRole('button', { name: 'Record run' }).click();
-    await page.locator('[data-testid="fab-run"]').first().waitFor();
-    await eventually(async () => (await api<{ revision: { state: string } }>(page, 'GET', `/api/revisions/${ids.r2}`)).revision.state)
-      .toBe('fabricated');
+    // a fabricated revision leaves the queue; the run and its photo are stored with it
+    await eventually(async () => (await api<{ revision: { state: string } }>(page, 'GET', `/api/revisions/${ids.r2}`)).revision.state).toBe('fabricated');
+    const [stored] = await db
+      .select({ runs: sql<number>`count(distinct ${fabRuns.id})::int`, photos: sql<number>`count(${fabPhotos.id})::int` })
+      .from(fabRuns)
+      .leftJoin(fabPhotos, eq(fabPhotos.fabRunId, fabRuns.id))
+      .where(eq(fabRuns.revisionId, ids.r2!));
+    expect(stored).toEqual({ runs: 1, photos: 1 });
   }, 180_000);
 
   it('the mailbox holds the review request, the approval, the release and the mention', async () => {
@@ -177,5 +184,9 @@ describe('review, release and fabrication in the browser', () => {
     const fab = await mailFor('fab@example.com');
     expect(fab).toContain(`Released to fab: ${title}`);
     expect(fab.some((s) => s.endsWith(`mentioned you on ${title}`))).toBe(true);
+    // and the Mailbox page of this local run lists them
+    await fabPage!.goto('/mailbox');
+    await fabPage!.getByRole('link', { name: `Released to fab: ${title}` }).first().waitFor();
+    await fabPage!.getByRole('link', { name: `Review requested: ${title}` }).first().waitFor();
   }, 60_000);
 });
