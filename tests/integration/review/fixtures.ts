@@ -58,7 +58,14 @@ export async function makeTeam(): Promise<TestTeam> {
 /** A revision of the team's design in the given state, with a finished bundle unless told otherwise. */
 export async function makeRevision(
   team: TestTeam,
-  options: { state?: RevisionState; authorId?: string; buildStatus?: 'queued' | 'running' | 'ready' | 'failed'; source?: string } = {},
+  options: {
+    state?: RevisionState;
+    authorId?: string;
+    buildStatus?: 'queued' | 'running' | 'ready' | 'failed';
+    source?: string;
+    /** a zip to store as the revision's bundle */
+    bundle?: Uint8Array;
+  } = {},
 ): Promise<string> {
   const [row] = await db
     .update(designs)
@@ -76,6 +83,7 @@ export async function makeRevision(
       state: options.state ?? 'draft',
       buildStatus: options.buildStatus ?? 'ready',
       bundleSha256: options.buildStatus && options.buildStatus !== 'ready' ? null : 'ab'.repeat(32),
+      bundle: options.bundle ? Buffer.from(options.bundle) : null,
     })
     .returning({ id: revisions.id });
   return revision.id;

@@ -4,6 +4,9 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PNG } from 'pngjs';
+import JSZip from 'jszip';
+import { writeGdsii } from '@/lib/gdsii';
+import type { LayoutLibrary } from '@/lib/layout/types';
 import { closeDb } from '@/db';
 import { TEST_PASSWORD, makeRevision, makeTeam, stateOf, type TestTeam } from './fixtures';
 import { anonymousFetch, signedInFetch, type Fetcher } from './http-session';
@@ -118,6 +121,36 @@ describe('comments and attachments over HTTP', () => {
 });
 
 describe('compare over HTTP', () => {
+  // Hand geometry on a 1 nm grid: a 10 × 5 µm rectangle moved 2 µm along x gains and loses 10 µm².
+  async function bundleWith(x0: number): Promise<Uint8Array> {
+    const library: LayoutLibrary = {
+      name: 'T',
+      databaseUnit: 1e-9,
+      userUnit: 1e-6,
+      layers: [],
+      cells: [{ name: 'TOP', shapes: [{ layer: 1, datatype: 0, polygons: [Int32Array.from([x0, 0, x0 + 10, 0, x0 + 10, 5, x0, 5].map((v) => v * 1000))] }], texts: [], placements: [] }],
+      topCell: 'TOP',
+    };
+    const zip = new JSZip();
+    zip.file('manifest.json', JSON.stringify({ layers: [{ layer: 1, datatype: 0, name: 'zones', purpose: 'zones' }] }));
+    zip.file('mask.gds', writeGdsii(library));
+    return zip.generateAsync({ type: 'uint8array' });
+  }
+
+  it('gives the per-layer XOR of the stored bundles to members, and a clear 409 without a bundle', async () => {
+    const a = await makeRevision(team, { bundle: await bundleWith(0) });
+    const b = await makeRevision(team, { bundle: await bundleWith(2) });
+    const response = await as.reviewer(`/api/compare?a=${a}&b=${b}`);
+    expect(response.status).toBe(200);
+    const body = await response.json();
+    expect(body.layers).toEqual([expect.objectContaining({ layer: 1, datatype: 0, name: 'zones (1/0)', addedArea: 10, removedArea: 10 })]);
+    expect((await as.outsider(`/api/compare?a=${a}&b=${b}`)).status).toBe(404);
+    const pending = await makeRevision(team, { buildStatus: 'running' });
+    const refused = await as.reviewer(`/api/compare?a=${a}&b=${pending}`);
+    expect(refused.status).toBe(409);
+    expect((await refused.json()).error).toMatch(/has no bundle to compare yet \(its export is running\)/);
+  });
+
   it('refuses a query without two different revision ids', async () => {
     const revisionId = await makeRevision(team);
     const same = await as.reviewer(`/api/compare?a=${revisionId}&b=${revisionId}`);
