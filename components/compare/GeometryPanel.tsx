@@ -61,7 +61,7 @@ export function GeometryPanel({ a, b }: { a: string; b: string }) {
         <>
           {d.truncated ? (
             <p className="text-xs text-warning">
-              The overlay draws the first {d.shownVertices.toLocaleString('en')} vertices of the changed regions; the areas above count all of them.
+              So many regions changed that the overlay draws an even sample of them ({d.shownVertices.toLocaleString('en')} vertices); the areas above count all of them.
             </p>
           ) : null}
           <p className="text-xs text-ink/70">{layerKey === 'all' ? 'Showing every layer; pick one in the table to show it alone.' : `Showing layer ${layerKey} only.`}</p>

@@ -15,6 +15,15 @@ function maskReport(report: Record<string, unknown> | null): Record<string, unkn
   return typeof mask === 'object' && mask !== null && !Array.isArray(mask) ? (mask as Record<string, unknown>) : {};
 }
 
+// Lists of places (narrow features, per-zone rows) would bury the figures; they are compared by count.
+const LONG_LIST = 8;
+
+function figures(mask: Record<string, unknown>): Record<string, unknown> {
+  return Object.fromEntries(
+    Object.entries(mask).map(([key, value]) => (Array.isArray(value) && value.length > LONG_LIST ? [`${key} (count)`, value.length] : [key, value])),
+  );
+}
+
 function warningCount(report: Record<string, unknown> | null): number {
   const warnings = maskReport(report).warnings;
   return Array.isArray(warnings) ? warnings.length : 0;
@@ -30,7 +39,7 @@ export function ReportTable({ a, b, labelA, labelB }: { a: ReportSide; b: Report
   });
   const rows: ParameterRow[] = [
     ...diffParameters(headline(a), headline(b)),
-    ...diffParameters(maskReport(a.report), maskReport(b.report), { ignore: ['warnings'] }).map((r) => ({ ...r, path: `report.${r.path}` })),
+    ...diffParameters(figures(maskReport(a.report)), figures(maskReport(b.report)), { ignore: ['warnings'] }).map((r) => ({ ...r, path: `report.${r.path}` })),
   ];
   return <ChangeTable rows={rows} labelA={labelA} labelB={labelB} empty="Neither revision has a manufacturability report yet." />;
 }

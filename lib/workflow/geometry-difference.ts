@@ -28,7 +28,7 @@ export interface GeometryDifference {
   bounds: { x0: number; y0: number; x1: number; y1: number } | null;
   /** vertices sent for drawing */
   shownVertices: number;
-  /** true when the vertex budget left some changed polygons out of the overlay */
+  /** true when the vertex budget left some changed polygons out of the overlay (every k-th is drawn) */
   truncated: boolean;
 }
 
@@ -89,22 +89,20 @@ export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, 
   const b = flatLibrary(after);
   // xorLayers answers on A's grid when the grids differ
   const um = a.databaseUnit / 1e-6;
-  let budget = vertexBudget;
-  let truncated = false;
-  const toUm = (polygons: Int32Array[]): number[][] => {
-    const out: number[][] = [];
-    for (const p of polygons) {
-      const vertices = p.length / 2;
-      if (vertices > budget) {
-        truncated = true;
-        continue;
-      }
-      budget -= vertices;
-      out.push(Array.from(p, (v) => v * um));
-    }
-    return out;
-  };
-  const layers = tiledXor(a, b).map((l) => ({
+  const xor = tiledXor(a, b);
+  const total = xor.reduce((sum, l) => [...l.added, ...l.removed].reduce((t, p) => t + p.length / 2, sum), 0);
+  // Over budget, every k-th changed polygon is drawn, so the overlay still covers the whole mask evenly.
+  const stride = Math.max(1, Math.ceil(total / vertexBudget));
+  let shown = 0;
+  let index = 0;
+  const toUm = (polygons: Int32Array[]): number[][] =>
+    polygons
+      .filter(() => index++ % stride === 0)
+      .map((p) => {
+        shown += p.length / 2;
+        return Array.from(p, (v) => v * um);
+      });
+  const layers = xor.map((l) => ({
     layer: l.layer,
     datatype: l.datatype,
     name: layerName(options.layerNames, l.layer, l.datatype),
@@ -115,5 +113,5 @@ export function geometryDifference(before: LayoutLibrary, after: LayoutLibrary, 
     added: toUm(l.added),
     removed: toUm(l.removed),
   }));
-  return { layers, bounds: libraryBounds([a, b]), shownVertices: vertexBudget - budget, truncated };
+  return { layers, bounds: libraryBounds([a, b]), shownVertices: shown, truncated: stride > 1 };
 }

@@ -76,10 +76,6 @@ export function isRevisionState(value: unknown): value is RevisionState {
   return typeof value === 'string' && (REVISION_STATES as readonly string[]).includes(value);
 }
 
-export function isRevisionMove(value: unknown): value is RevisionMove {
-  return typeof value === 'string' && (REVISION_MOVES as readonly string[]).includes(value);
-}
-
 export type MovePlan =
   | { ok: true; from: RevisionState; to: RevisionState; permission: MovePermission }
   | { ok: false; message: string };
