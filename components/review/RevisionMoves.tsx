@@ -1,6 +1,7 @@
 'use client';
 
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useEffect, useId, useState } from 'react';
 import { Button, Notice } from '@/components/ui';
@@ -136,6 +137,9 @@ export function RevisionMoves({ revision }: RevisionMovesProps) {
           Now {move.data.stateLabel}.{move.data.emailed.length > 0 ? ` E-mailed ${move.data.emailed.join(', ')}.` : ''}
         </Notice>
       ) : null}
+      <Link href={`/compare?b=${revision.id}`} className="text-xs" data-testid="compare-previous">
+        Compare with the previous revision
+      </Link>
     </div>
   );
 }

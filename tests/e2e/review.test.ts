@@ -110,7 +110,9 @@ describe('review, release and fabrication in the browser', () => {
 
   it('the reviewer compares 1 and 2, comments on a line, approves and releases to fab', async () => {
     const page = await personPage('reviewer@example.com');
-    await page.goto(`/compare?a=${ids.r1}&b=${ids.r2}`);
+    await page.goto(`/revisions/${ids.r2}`);
+    await page.getByTestId('compare-previous').click();
+    await page.waitForURL((url) => url.pathname === '/compare' && url.searchParams.get('a') === ids.r1 && url.searchParams.get('b') === ids.r2);
     const diff = page.getByTestId('script-diff');
     await eventually(() => diff.innerText()).toMatch(/\+1\s+−1 lines/);
     await diff.locator('.monaco-diff-editor').first().waitFor({ timeout: 120_000 });

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { redirect } from 'next/navigation';
 import { getRevisionForUser, listRevisions } from '@/db/queries/revisions';
 import { allows, pageUser } from '@/app/_server/session';
 import { ChangeTable } from '@/components/compare/ChangeTable';
@@ -16,6 +17,7 @@ export const metadata: Metadata = { title: 'Compare' };
 export const dynamic = 'force-dynamic';
 
 type Search = Record<string, string | string[] | undefined>;
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const first = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 
 function stateText(state: string): string {
@@ -26,6 +28,20 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
   const search = await searchParams;
   const query = { a: first(search.a) ?? '', b: first(search.b) ?? '' };
   const user = await pageUser(`/compare?a=${encodeURIComponent(query.a)}&b=${encodeURIComponent(query.b)}`);
+  // "/compare?b=<revision>" compares a revision with the one saved before it
+  if (!query.a && UUID.test(query.b)) {
+    const found = await getRevisionForUser(query.b, user.id);
+    if (found?.role) {
+      const previous = (await listRevisions(found.revision.designId)).find((r) => r.number < found.revision.number);
+      if (previous) redirect(`/compare?a=${previous.id}&b=${found.revision.id}`);
+      return (
+        <div className="mx-auto max-w-3xl">
+          <PageHeader title="Compare" />
+          <Notice tone="info">Revision {found.revision.number} of {found.designName} is its first revision; there is nothing earlier to compare it with.</Notice>
+        </div>
+      );
+    }
+  }
   const parsed = compareQuerySchema.safeParse(query);
   if (!parsed.success) {
     return (
