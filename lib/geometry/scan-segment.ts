@@ -9,6 +9,9 @@ export interface SegmentCrossings {
 }
 
 const CHUNK_LENGTH = 256;
+const MAX_SAMPLES_PER_PIECE = 4096;
+/** µm; below this a piece is sampled at most MAX_SAMPLES_PER_PIECE times whatever the bound says */
+const MIN_PIECE_LENGTH = 1e-3;
 /** Fraction of the proven-safe step actually used, so rounding never breaks the bound. */
 const SAFETY = 0.9;
 
@@ -50,7 +53,7 @@ export function refineRoot(f: (t: number) => number, a: number, fa: number, b: n
  */
 export function scanSegment(
   g: (x: number, y: number) => number,
-  field: PhaseField,
+  field: Pick<PhaseField, 'maxSpatialFrequency'>,
   phaseGap: number,
   ax: number,
   ay: number,
@@ -64,35 +67,43 @@ export function scanSegment(
   const dx = bx - ax;
   const dy = by - ay;
   const at = (t: number) => g(ax + t * dx, ay + t * dy);
-  const chunks = Math.max(1, Math.ceil(length / CHUNK_LENGTH));
   let tPrev = 0;
   let gPrev = at(0);
-  for (let c = 0; c < chunks; c++) {
-    const t0 = c / chunks;
-    const t1 = (c + 1) / chunks;
-    const cx0 = ax + t0 * dx;
-    const cy0 = ay + t0 * dy;
-    const cx1 = ax + t1 * dx;
-    const cy1 = ay + t1 * dy;
-    const frequency = field.maxSpatialFrequency(Math.min(cx0, cx1), Math.min(cy0, cy1), Math.max(cx0, cx1), Math.max(cy0, cy1));
-    const chunkLength = length / chunks;
-    const h = safeStep(phaseGap, frequency, chunkLength);
-    const n = Math.max(1, Math.ceil(chunkLength / h));
-    for (let i = 1; i <= n; i++) {
-      const t = t0 + ((t1 - t0) * i) / n;
+  // Pieces of the segment are sampled at their own safe step; a piece that would need many samples
+  // is halved first, so a bound that blows up near a singular point costs only a few levels of halving.
+  const sample = (t0: number, t1: number): void => {
+    const x0 = ax + t0 * dx;
+    const y0 = ay + t0 * dy;
+    const x1 = ax + t1 * dx;
+    const y1 = ay + t1 * dy;
+    const pieceLength = (t1 - t0) * length;
+    const frequency = field.maxSpatialFrequency(Math.min(x0, x1), Math.min(y0, y1), Math.max(x0, x1), Math.max(y0, y1));
+    const h = safeStep(phaseGap, frequency, pieceLength);
+    const n = Math.max(1, Math.ceil(pieceLength / h));
+    if (n > MAX_SAMPLES_PER_PIECE && pieceLength > MIN_PIECE_LENGTH) {
+      const mid = 0.5 * (t0 + t1);
+      sample(t0, mid);
+      sample(mid, t1);
+      return;
+    }
+    const count = Math.min(n, MAX_SAMPLES_PER_PIECE);
+    for (let i = 1; i <= count; i++) {
+      const t = t0 + ((t1 - t0) * i) / count;
       const gt = at(t);
       if (gPrev > 0 !== gt > 0) {
         const root = refineRoot(at, tPrev, gPrev, t, gt, tolerance / length);
         // A zero that g only touches (a phase extremum sitting on a boundary level) is no boundary.
-        const eps = Math.min(1e-3, chunkLength / n / 4) / length;
+        const eps = Math.min(1e-3, pieceLength / count / 4) / length;
         if (at(root - eps) > 0 !== at(root + eps) > 0) {
           out.t.push(root);
-          out.step.push(chunkLength / n);
+          out.step.push(pieceLength / count);
         }
       }
       tPrev = t;
       gPrev = gt;
     }
-  }
+  };
+  const chunks = Math.max(1, Math.ceil(length / CHUNK_LENGTH));
+  for (let c = 0; c < chunks; c++) sample(c / chunks, (c + 1) / chunks);
   return out;
 }

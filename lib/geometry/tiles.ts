@@ -50,8 +50,11 @@ export function planMaskTiles(design: CompiledDesign, chordTolerance: number): M
       y0 = Math.min(y0, domain[i + 1]);
       y1 = Math.max(y1, domain[i + 1]);
     }
-    const xs = anchor.x > x0 && anchor.x < x1 ? [x0, anchor.x, x1] : [x0, x1];
-    const ys = anchor.y > y0 && anchor.y < y1 ? [y0, anchor.y, y1] : [y0, y1];
+    // Only a lens centre makes a good cut; a design without one (a bare spiral phase, a grating)
+    // may have a boundary running along the cut, so it stays in one tile.
+    const centred = design.symmetryCentre !== null || design.foci.length > 0;
+    const xs = centred && anchor.x > x0 && anchor.x < x1 ? [x0, anchor.x, x1] : [x0, x1];
+    const ys = centred && anchor.y > y0 && anchor.y < y1 ? [y0, anchor.y, y1] : [y0, y1];
     for (let i = 0; i + 1 < xs.length; i++) {
       for (let j = 0; j + 1 < ys.length; j++) {
         const part = intersectConvex(domain, boxPolygon({ x0: xs[i], y0: ys[j], x1: xs[i + 1], y1: ys[j + 1] }));

@@ -51,7 +51,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
   const converged = Math.min(1e-5, tol * 1e-2);
   const delta = Math.min(1e-4, settings.grid / 10);
   const minStep = settings.grid / 8;
-  const turnRadius = 4 * minStep;
+  const turnRadius = 16 * minStep;
   const maxStep = Math.max(minStep * 16, Math.min(settings.seedSpacing, domain.box.x1 - domain.box.x0, domain.box.y1 - domain.box.y0));
   const seedTolerance = Math.min(1e-4, tol / 10);
   const seeds: SeedGrid = buildSeedGrid(g, field, phaseGap, domain, settings.seedSpacing, settings.anchorX, settings.anchorY, seedTolerance);
@@ -109,8 +109,9 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     let L = Math.min(maxStep, 1);
     let budget = depthInDomain(domain, px, py);
     let turns = 0;
-    const guard = 200_000_000;
-    for (let iteration = 0; iteration < guard; iteration++) {
+    let rejected = 0;
+    for (;;) {
+      if (++rejected > 4000) throw new GeometryError(`A zone boundary could not be followed near (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
       // Is the domain edge within reach of this step?
       let exitEdge = -1;
       let hx = 0;
@@ -204,6 +205,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
           px = next.x;
           py = next.y;
           out.push(px, py);
+          rejected = 0;
           gv = g(px, py);
           gradient(px, py, gv);
           gx = grad[0];
@@ -216,6 +218,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
         }
         continue;
       }
+      rejected = 0;
       const status = visitChord(px, py, qx, qy, start, out.length);
       if (status === 'closed') return { kind: 'closed' };
       if (status === 'duplicate') return { kind: 'duplicate' };
@@ -230,7 +233,6 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
       ty = (-dir * gx) / gn;
       L = Math.min(maxStep, L * Math.min(2, 0.9 * Math.sqrt(tol / Math.max(sag, tol * 1e-6))));
     }
-    throw new GeometryError(`A zone boundary did not close near (${x0.toFixed(4)}, ${y0.toFixed(4)}) µm.`);
   };
 
   const edgeFraction = (edge: number, x: number, y: number): number => {

@@ -2,7 +2,7 @@ import type { CompiledDesign, Region } from '../design/types';
 import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
 import type { MeasuredWidth } from './report-types';
 import { regionSignedDistance } from './region';
-import { refineRoot, safeStep } from './scan-segment';
+import { scanSegment } from './scan-segment';
 
 export interface RayMeasurement {
   zoneCount: number;
@@ -52,6 +52,7 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
   const spec = layerFunctionSpecs(design.quantization)[0];
   const pieces = design.pieces.map((p) => ({ region: p.region, field: p.field, g: boundaryFunction(p.field, spec).value }));
   const pieceAt = (x: number, y: number) => pieces.find((p) => !p.region || regionSignedDistance(p.region, x, y) > 0);
+  const bound = { maxSpatialFrequency: (x0: number, y0: number, x1: number, y1: number) => Math.max(...pieces.map((p) => p.field.maxSpatialFrequency(x0, y0, x1, y1))) };
   const result: RayMeasurement = { zoneCount: 0, outermostZone: null, narrowestZone: null, smallestGap: null };
   const delta = 1e-4;
   for (let r = 0; r < RAY_COUNT; r++) {
@@ -61,47 +62,24 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
     const span = insideSpan(design.aperture, centre.x, centre.y, dx, dy, reach);
     if (!span) continue;
     const [begin, end] = span;
-    const drawnAt = (s: number) => {
-      const x = centre.x + s * dx;
-      const y = centre.y + s * dy;
+    const gOnPlane = (x: number, y: number) => {
       const p = pieceAt(x, y);
       return p ? p.g(x, y) : -1;
     };
-    const crossings: Crossing[] = [];
-    const chunk = 64;
-    let s0 = begin;
-    let v0 = drawnAt(begin);
-    const startsDrawn = v0 > 0;
-    while (s0 < end) {
-      const s1 = Math.min(end, s0 + chunk);
-      const xa = centre.x + s0 * dx;
-      const ya = centre.y + s0 * dy;
-      const xb = centre.x + s1 * dx;
-      const yb = centre.y + s1 * dy;
-      const frequency = Math.max(
-        ...pieces.map((p) => p.field.maxSpatialFrequency(Math.min(xa, xb), Math.min(ya, yb), Math.max(xa, xb), Math.max(ya, yb))),
-      );
-      const h = safeStep(spec.phaseGap, frequency, s1 - s0);
-      const n = Math.max(1, Math.ceil((s1 - s0) / h));
-      for (let i = 1; i <= n; i++) {
-        const s = s0 + ((s1 - s0) * i) / n;
-        const v = drawnAt(s);
-        if (v > 0 !== v0 > 0) {
-          const sc = refineRoot(drawnAt, s - (s1 - s0) / n, v0, s, v, 1e-5);
-          const x = centre.x + sc * dx;
-          const y = centre.y + sc * dy;
-          const p = pieceAt(x, y) ?? pieces[0];
-          const gv = p.g(x, y);
-          const gx = (p.g(x + delta, y) - gv) / delta;
-          const gy = (p.g(x, y + delta) - gv) / delta;
-          const norm = Math.sqrt(gx * gx + gy * gy);
-          const cut = pieceAt(x - 1e-3 * dx, y - 1e-3 * dy) !== pieceAt(x + 1e-3 * dx, y + 1e-3 * dy);
-          crossings.push({ s: sc, cosine: norm > 0 ? Math.abs(gx * dx + gy * dy) / norm : 1, cut });
-        }
-        v0 = v;
-      }
-      s0 = s1;
-    }
+    const startsDrawn = gOnPlane(centre.x + begin * dx, centre.y + begin * dy) > 0;
+    const found = scanSegment(gOnPlane, bound, spec.phaseGap, centre.x + begin * dx, centre.y + begin * dy, centre.x + end * dx, centre.y + end * dy, 1e-5);
+    const crossings: Crossing[] = found.t.map((t) => {
+      const sc = begin + t * (end - begin);
+      const x = centre.x + sc * dx;
+      const y = centre.y + sc * dy;
+      const p = pieceAt(x, y) ?? pieces[0];
+      const gv = p.g(x, y);
+      const gx = (p.g(x + delta, y) - gv) / delta;
+      const gy = (p.g(x, y + delta) - gv) / delta;
+      const norm = Math.sqrt(gx * gx + gy * gy);
+      const cut = pieceAt(x - 1e-3 * dx, y - 1e-3 * dy) !== pieceAt(x + 1e-3 * dx, y + 1e-3 * dy);
+      return { s: sc, cosine: norm > 0 ? Math.abs(gx * dx + gy * dy) / norm : 1, cut };
+    });
     // Intervals between consecutive crossings are whole zones (drawn) or gaps (undrawn).
     let drawn = startsDrawn;
     const zones: MeasuredWidth[] = [];
