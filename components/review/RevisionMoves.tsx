@@ -13,6 +13,7 @@ interface MoveChoices {
   stateLabel: string;
   moves: { move: RevisionMove; label: string }[];
   ownRevision: boolean;
+  bundlePending: boolean;
 }
 
 /** Who hears about each move, said before the user confirms it. */
@@ -43,7 +44,12 @@ export function RevisionMoves({ revision }: RevisionMovesProps) {
   const [pageState, setPageState] = useState(revision.state);
   useEffect(() => setPageState(revision.state), [revision.state]);
   const queryKey = ['revision-moves', revision.id];
-  const choices = useQuery({ queryKey, queryFn: () => apiJson<MoveChoices>(`/api/revisions/${revision.id}/moves`) });
+  const choices = useQuery({
+    queryKey,
+    queryFn: () => apiJson<MoveChoices>(`/api/revisions/${revision.id}/moves`),
+    // while the export runs, look again now and then so "Request review" appears when the bundle is ready
+    refetchInterval: (query) => (query.state.data?.bundlePending ? 3000 : false),
+  });
   const move = useMutation({
     mutationFn: (which: RevisionMove) =>
       apiJson<{ state: RevisionState; stateLabel: string; emailed: string[] }>(`/api/revisions/${revision.id}/moves`, {
@@ -96,7 +102,9 @@ export function RevisionMoves({ revision }: RevisionMovesProps) {
           <p className="text-sm text-ink/70">
             {data.ownRevision
               ? 'You wrote this revision, so another reviewer or an owner must review it.'
-              : `No review move is open to you while the revision is ${data.stateLabel}.`}
+              : data.bundlePending
+                ? 'Review can be requested once the export has finished and the bundle is ready.'
+                : `No review move is open to you while the revision is ${data.stateLabel}.`}
           </p>
         )
       ) : null}

@@ -264,6 +264,8 @@ export interface MoveChoices {
   moves: { move: RevisionMove; label: string }[];
   /** why a reviewer sees no approval buttons on this revision, when that is the reason */
   ownRevision: boolean;
+  /** review could be requested but the export has not finished */
+  bundlePending: boolean;
 }
 
 /** What the signed-in user may do with a revision now (for the move buttons). */
@@ -271,7 +273,9 @@ export async function moveChoices(revisionId: string, userId: string): Promise<O
   const access = await loadRevisionAccess(db, revisionId, userId);
   if (!access || access.role === null) return refuse(404, REVISION_NOT_FOUND);
   const actor = { userId, role: access.role };
-  const moves = allowedMoves(access.revision.state, actor, access.revision.authorId).map((move) => ({ move, label: MOVE_RULES[move].label }));
+  const ready = access.revision.buildStatus === 'ready';
+  const allowed = allowedMoves(access.revision.state, actor, access.revision.authorId);
+  const moves = allowed.filter((move) => ready || move !== 'requestReview').map((move) => ({ move, label: MOVE_RULES[move].label }));
   const ownRevision = access.role === 'reviewer' && access.revision.authorId === userId && access.revision.state === 'in_review';
-  return { ok: true, state: access.revision.state, moves, ownRevision };
+  return { ok: true, state: access.revision.state, moves, ownRevision, bundlePending: !ready && allowed.includes('requestReview') };
 }

@@ -51,7 +51,9 @@ describe('moves over HTTP', () => {
   it('offers each role its moves, applies an allowed one and answers a stale page with 409', async () => {
     const revisionId = await makeRevision(team);
     const designerChoices = await (await as.designer(`/api/revisions/${revisionId}/moves`)).json();
-    expect(designerChoices).toEqual({ state: 'draft', stateLabel: 'draft', moves: [{ move: 'requestReview', label: 'Request review' }], ownRevision: false });
+    expect(designerChoices).toEqual({ state: 'draft', stateLabel: 'draft', moves: [{ move: 'requestReview', label: 'Request review' }], ownRevision: false, bundlePending: false });
+    const building = await makeRevision(team, { buildStatus: 'running' });
+    expect(await (await as.designer(`/api/revisions/${building}/moves`)).json()).toMatchObject({ moves: [], bundlePending: true });
     expect((await (await as.viewer(`/api/revisions/${revisionId}/moves`)).json()).moves).toEqual([]);
 
     const forbidden = await as.viewer(`/api/revisions/${revisionId}/moves`, postJson({ move: 'requestReview', expectedState: 'draft' }));

@@ -25,5 +25,5 @@ export const GET = handle<{ revisionId: string }>(async (_request, { params }) =
   const user = await requireUser();
   const outcome = await moveChoices(params.revisionId, user.id);
   if (!outcome.ok) throw apiError(outcome.status, outcome.message);
-  return json({ state: outcome.state, stateLabel: STATE_LABELS[outcome.state], moves: outcome.moves, ownRevision: outcome.ownRevision });
+  return json({ state: outcome.state, stateLabel: STATE_LABELS[outcome.state], moves: outcome.moves, ownRevision: outcome.ownRevision, bundlePending: outcome.bundlePending });
 });
