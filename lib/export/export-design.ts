@@ -32,7 +32,6 @@ export interface ExportResult {
   design: CompiledDesign;
 }
 
-const LABEL_LAYER_DEFAULT = { layer: 10, datatype: 0 };
 const MATRIX_GAP = 50;
 const MATRIX_LABEL_HEIGHT = 20;
 
@@ -62,7 +61,7 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
     }
     return mask;
   });
-  const labelLayer = built[0].library.layers.find((l) => l.purpose === 'label') ?? LABEL_LAYER_DEFAULT;
+  const labelLayer = built[0].library.layers.find((l) => l.purpose === 'label') ?? settings.layers.labels;
   const labelled = built.map(({ library }) => addLabels(library, design.labels, font, labelLayer, settings.chordTolerance));
 
   settings.onProgress(0.75, 'labels and layout');
@@ -136,6 +135,7 @@ function buildVariant(design: CompiledDesign, settings: ResolvedExportOptions, n
       chordTolerance: settings.chordTolerance,
       maxVertices: settings.maxVertices,
       minimumFeature: settings.minimumFeature,
+      layers: settings.layers,
       name,
     });
   } catch (error) {

@@ -1,3 +1,4 @@
+import { defaultMaskOptions, type MaskLayerOptions } from '../geometry';
 import type { PhaseMap } from '../phasemap/types';
 import { ExportError } from './errors';
 
@@ -32,12 +33,15 @@ export interface ExportOptions {
   /** wrap OASIS cells in CBLOCKs; off by default: the zip deflates the file anyway and CBLOCKs cost ~10x the write time */
   compressOasis?: boolean;
   matrix?: ExposureMatrixRequest;
+  /** layer and datatype per purpose (the design's layer map); unset purposes keep the geometry's defaults */
+  layers?: Partial<MaskLayerOptions>;
   phaseMaps?: (name: string) => PhaseMap | undefined;
   onProgress?: (fraction: number, stage: string) => void;
 }
 
-export interface ResolvedExportOptions extends Required<Omit<ExportOptions, 'matrix' | 'phaseMaps' | 'onProgress'>> {
+export interface ResolvedExportOptions extends Required<Omit<ExportOptions, 'matrix' | 'phaseMaps' | 'onProgress' | 'layers'>> {
   matrix: ExposureMatrixRequest | null;
+  layers: MaskLayerOptions;
   phaseMaps: ExportOptions['phaseMaps'];
   onProgress: (fraction: number, stage: string) => void;
 }
@@ -61,6 +65,7 @@ export function resolveExportOptions(options: ExportOptions): ResolvedExportOpti
     font: options.font,
     compressOasis: options.compressOasis ?? false,
     matrix: options.matrix ?? null,
+    layers: { ...defaultMaskOptions().layers, ...options.layers },
     phaseMaps: options.phaseMaps,
     onProgress: options.onProgress ?? (() => undefined),
   };

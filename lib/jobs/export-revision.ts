@@ -8,6 +8,7 @@ import { ExportError, exportDesign } from '../export';
 import { processProfileSchema, DEFAULT_PROCESS_PROFILE } from '../schemas/designs';
 import { ExportRefused, type Exporter } from './export-job';
 import { maskFigures } from './mask-figures';
+import { maskLayersFromLayerMap } from './mask-layers';
 import { phaseMapLookup } from './phase-maps';
 
 const FONT_PATH = path.join(__dirname, '..', '..', 'fonts', 'jetbrains-mono-latin-400-normal.woff');
@@ -35,6 +36,7 @@ export const exportRevision: Exporter = async (input, onProgress) => {
       chordTolerance: profile.chordTolerance,
       databaseUnit: profile.databaseUnit,
       minimumFeature: profile.minimumFeature,
+      layers: maskLayersFromLayerMap(profile.layerMap),
       font: new Uint8Array(readFileSync(FONT_PATH)),
       phaseMaps,
       onProgress,

@@ -18,7 +18,7 @@ const micrometres = (what: string, min: number, max: number) =>
     .min(min, `${what} must be at least ${min} µm.`)
     .max(max, `${what} must be at most ${max} µm.`);
 
-const layerNumber = z.number().int('Layer and datatype numbers are whole numbers.').min(0, 'Layer and datatype numbers start at 0.').max(65535, 'GDSII allows layer and datatype numbers up to 65535.');
+const layerNumber = z.number().int('Layer and datatype numbers are whole numbers.').min(0, 'Layer and datatype numbers start at 0.').max(32767, 'Layer and datatype numbers go up to 32767 (GDSII stores them as signed 16-bit integers).');
 
 export const LAYER_PURPOSES = ['zones', 'level', 'label', 'aperture', 'marker'] as const;
 
