@@ -29,6 +29,10 @@ cleanup() {
   local code=$?
   zw_stop_services test || true
   if [ "$pg_was_running" = false ]; then bash scripts/pg.sh stop || true; fi
+  # The last line: "N passed, N failed" in plain words, for tools that read the end of the log.
+  if [ -n "${summary:-}" ] && [ -f "$summary" ]; then
+    node -e 'const r = require(process.argv[1]); console.log(`tests: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests + r.numTodoTests} skipped`)' "$summary"
+  fi
   exit "$code"
 }
 trap cleanup EXIT
@@ -46,8 +50,11 @@ node_modules/.bin/next build >"$ZW_DATA/log/build-test.log" 2>&1 || { tail -n 60
 zw_start_services test
 
 set +e
-VITE_CONFIG_NATIVE_IGNORE_WARNING=true node_modules/.bin/vitest run "$@"
+summary="$ZW_DATA/run/vitest-summary.json"
+rm -f "$summary"
+VITE_CONFIG_NATIVE_IGNORE_WARNING=true node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json="$summary" "$@"
 status=$?
+
 set -e
 [ "$status" -eq 0 ] || zw_say "tests failed; service logs are in .data/log/"
 exit "$status"
