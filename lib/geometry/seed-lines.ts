@@ -4,9 +4,10 @@ import { scanSegment } from './scan-segment';
 
 /**
  * Seed lines: horizontal and vertical lines at a fixed spacing, one pair through an anchor point
- * (the symmetry centre or a focus, where a lens phase has its extremum). Every boundary crossing on
- * them is found (at most one per sample interval, see scan-segment.ts); a contour is traced from the
- * first unvisited crossing and marks every crossing it passes.
+ * (the symmetry centre or a focus, where a lens phase has its extremum). For a single wave every
+ * boundary crossing on them is found (at most one per sample interval, see scan-segment.ts); for a
+ * combined field the frequency bound covers the parts, not arg u, so close crossings can merge into
+ * one seed. A contour is traced from the first unvisited crossing and marks every crossing it passes.
  */
 export interface SeedLine {
   /** y of a horizontal line, x of a vertical one */
@@ -15,7 +16,10 @@ export interface SeedLine {
   positions: Float64Array;
   /** sample step used around each crossing */
   steps: Float64Array;
-  visited: Uint8Array;
+  /** 0 while unvisited, else the number of the trace that passed it */
+  visited: Int32Array;
+  /** how often that trace passed it */
+  passes: Uint8Array;
 }
 
 export interface SeedGrid {
@@ -56,10 +60,10 @@ function scanLine(
   const [dx, dy] = horizontal ? [1, 0] : [0, 1];
   const [px, py] = horizontal ? [0, coordinate] : [coordinate, 0];
   const [s0, s1] = clipLineToDomain(domain, px, py, dx, dy);
-  if (!(s1 > s0)) return { coordinate, positions: new Float64Array(0), steps: new Float64Array(0), visited: new Uint8Array(0) };
+  if (!(s1 > s0)) return { coordinate, positions: new Float64Array(0), steps: new Float64Array(0), visited: new Int32Array(0), passes: new Uint8Array(0) };
   const found = scanSegment(g, field, phaseGap, px + s0 * dx, py + s0 * dy, px + s1 * dx, py + s1 * dy, tolerance);
   const positions = Float64Array.from(found.t, (t) => s0 + t * (s1 - s0));
-  return { coordinate, positions, steps: Float64Array.from(found.step), visited: new Uint8Array(positions.length) };
+  return { coordinate, positions, steps: Float64Array.from(found.step), visited: new Int32Array(positions.length), passes: new Uint8Array(positions.length) };
 }
 
 export function buildSeedGrid(

@@ -38,6 +38,8 @@ const MAX_TURN = 0.3;
 /** Accepted change of |∇g| between two vertices; a faster change means a singular point ahead. */
 const GRADIENT_RATIO = 1.67;
 const TURN_SAMPLES = 96;
+/** Passes of one trace through one seed before it counts as going round in circles. */
+const MAX_PASSES = 8;
 
 /**
  * Follows every zone boundary (g = 0) inside a convex domain and returns the drawn regions as closed
@@ -56,6 +58,8 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
   const seedTolerance = Math.min(1e-4, tol / 10);
   const seeds: SeedGrid = buildSeedGrid(g, field, phaseGap, domain, settings.seedSpacing, settings.anchorX, settings.anchorY, seedTolerance);
   const grad = new Float64Array(2);
+  /** numbers each trace, so a seed passed twice by one trace is told from one passed by another */
+  let traceNumber = 0;
 
   const gradient = (x: number, y: number, gv: number): void => {
     grad[0] = (g(x + delta, y) - gv) / delta;
@@ -87,14 +91,23 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
           if (vertices >= 3) return 'closed';
           continue;
         }
-        if (line.visited[s]) return 'duplicate';
-        line.visited[s] = 1;
+        if (line.visited[s] === traceNumber && line.passes[s] < MAX_PASSES) {
+          // The same trace back at its own seed: a boundary grazing the seed line crosses it several
+          // times within one sample step (the scan found an odd number of them as one crossing), and
+          // all are credited to that seed. A trace circling a closed contour comes back more often.
+          line.passes[s]++;
+          continue;
+        }
+        if (line.visited[s] !== 0) return 'duplicate';
+        line.visited[s] = traceNumber;
+        line.passes[s] = 1;
       }
     }
     return 'ok';
   };
 
   const trace = (x0: number, y0: number, dir: 1 | -1, start: SeedRef | null, out: PointBuffer): TraceEnd => {
+    traceNumber++;
     let px = x0;
     let py = y0;
     let gv = g(px, py);
@@ -381,7 +394,8 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     lines.forEach((line, index) => {
       for (let s = 0; s < line.positions.length; s++) {
         if (line.visited[s]) continue;
-        line.visited[s] = 1;
+        line.visited[s] = traceNumber + 1;
+        line.passes[s] = 1;
         const x = horizontal ? line.positions[s] : line.coordinate;
         const y = horizontal ? line.coordinate : line.positions[s];
         const ref = { horizontal, line: index, seed: s };

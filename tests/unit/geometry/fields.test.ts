@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildMask, MaskOptionsError, xorLayers } from '@/lib/geometry';
+import { compileScript } from '@/lib/lang';
 import type { PhaseField, Quantization } from '@/lib/design/types';
 import { area, drawnTester, rng, selfIntersects, unionArea, zonePolygons } from './checks';
 import { binary, combinedField, design, lensField, vortexField } from './fixtures';
@@ -68,6 +69,24 @@ describe('phase singularities and combined fields', () => {
     const polygons = zonePolygons(library);
     checkClean(polygons);
     expect(agreement(polygons, binaryRule(field, 0.5, 0), R, 5)).toBeGreaterThan(0.995);
+  });
+
+  it('the two-focus off-axis benchmark script (1.4 mm aperture), whose boundaries graze seed lines, builds and follows the contract test', () => {
+    // Near destructive interference arg u outruns the parts' frequency bound, so a seed line can find
+    // one of two close crossings of a boundary running almost along it; the tracer passes that seed twice.
+    const compiled = compileScript(`wavelength 633 nm
+aperture circle(diameter: 1.4 mm)
+near = lens(focal: 20 mm)
+far = lens_to(focus: (1 mm, 0.5 mm, 25 mm))
+profile superpose(wave(near, weight: 0.6), wave(far, weight: 0.4))
+quantize binary(duty: 0.5, modulation: phase, index: 1.6)
+`);
+    if (!compiled.ok) throw new Error(compiled.diagnostics.map((d) => d.message).join('; '));
+    const field = compiled.design.pieces[0].field;
+    const { library } = buildMask(compiled.design, { chordTolerance: 0.005 });
+    const polygons = zonePolygons(library);
+    checkClean(polygons);
+    expect(agreement(polygons, binaryRule(field, 0.5, compiled.design.quantization.phaseOffset), 700, 11)).toBeGreaterThan(0.995);
   });
 
   it('two coaxial lenses of equal weight (the field vanishes on whole circles) follow the contract test', () => {
