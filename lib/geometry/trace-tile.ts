@@ -163,7 +163,8 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
           qy -= s * gy;
         }
         corr = Math.sqrt((qx - predictedX) ** 2 + (qy - predictedY) ** 2);
-        if (ok && depthInDomain(domain, qx, qy) < 0) {
+        // q lies within |pq| of p, whose depth is at least `budget`: only a long step needs the full test.
+        if (ok && (budget <= 0 || (qx - px) ** 2 + (qy - py) ** 2 >= budget * budget) && depthInDomain(domain, qx, qy) < 0) {
           // The curve leaves between p and q: finish on the edge the chord crosses.
           const chord = Math.sqrt((qx - px) ** 2 + (qy - py) ** 2);
           const e = exitAlong(domain, px, py, (qx - px) / chord, (qy - py) / chord);
