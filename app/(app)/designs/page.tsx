@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { DesignNameCell } from '@/components/designs/DesignNameCell';
 import { listDesignsForUser, teamsWithRole } from '@/db/queries/designs';
 import { pageUser } from '@/app/_server/session';
 import { ExampleStarter } from '@/components/designs/ExampleStarter';
@@ -43,12 +44,7 @@ export default async function DesignsPage() {
             <tbody>
               {designs.map((d) => (
                 <tr key={d.id} className="border-b border-hairline last:border-0">
-                  <td className="py-2 pr-4">
-                    <Link href={`/designs/${d.id}`} className="font-medium">
-                      {d.name}
-                    </Link>
-                    {d.description ? <p className="text-xs text-ink/60">{d.description}</p> : null}
-                  </td>
+                  <DesignNameCell design={d} />
                   <td className="py-2 pr-4">
                     {d.teamName} <span className="text-xs text-ink/60">({ROLE_LABELS[d.role].toLowerCase()})</span>
                   </td>

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { DesignNameCell } from '@/components/designs/DesignNameCell';
 import { buttonClass, DateTime, Notice, PageHeader, Panel, Tag } from '@/components/ui';
 import { allows, pageMembership } from '@/app/_server/session';
 import { ROLE_LABELS } from '@/lib/auth';
@@ -74,12 +75,7 @@ export default async function DeskPage() {
             <tbody>
               {designList.map((d) => (
                 <tr key={d.id} className="border-b border-hairline last:border-0">
-                  <td className="py-2 pr-4">
-                    <Link href={`/designs/${d.id}`} className="font-medium">
-                      {d.name}
-                    </Link>
-                    {d.description ? <p className="text-xs text-ink/60">{d.description}</p> : null}
-                  </td>
+                  <DesignNameCell design={d} />
                   <td className="py-2 pr-4">
                     {d.latestNumber ? <span className="numeric mr-2">r{d.latestNumber}</span> : null}
                     <Tag>{stateLabel(d.latestState)}</Tag>
