@@ -69,9 +69,10 @@ function requirePositive(value: number, what: string): void {
 }
 
 function requireLayer(value: LayerDatatype, what: string): void {
-  const ok = (n: number) => Number.isInteger(n) && n >= 0 && n <= 65535;
+  // GDSII stores layer and datatype as signed 16-bit integers.
+  const ok = (n: number) => Number.isInteger(n) && n >= 0 && n <= 32767;
   if (!value || !ok(value.layer) || !ok(value.datatype)) {
-    throw new MaskOptionsError(`${what} needs an integer layer and datatype between 0 and 65535.`);
+    throw new MaskOptionsError(`${what} needs an integer layer and datatype between 0 and 32767.`);
   }
 }
 
