@@ -1,3 +1,4 @@
+import { loopBounds } from '@/lib/geometry/polygon-math';
 import type { Bounds } from './flatten';
 
 /** A group of nearby polygons with the box that holds them, so the view can skip what is off screen. */
@@ -6,19 +7,6 @@ export interface Tile {
   polygons: Float64Array[];
 }
 
-function polygonBounds(p: Float64Array): Bounds {
-  let x0 = Infinity;
-  let y0 = Infinity;
-  let x1 = -Infinity;
-  let y1 = -Infinity;
-  for (let i = 0; i < p.length; i += 2) {
-    if (p[i] < x0) x0 = p[i];
-    if (p[i] > x1) x1 = p[i];
-    if (p[i + 1] < y0) y0 = p[i + 1];
-    if (p[i + 1] > y1) y1 = p[i + 1];
-  }
-  return { x0, y0, x1, y1 };
-}
 
 /** Sorts polygons into a `grid` × `grid` raster over `bounds` by the centre of each polygon's box. */
 export function tilePolygons(polygons: Float64Array[], bounds: Bounds, grid = 16): Tile[] {
@@ -26,7 +14,7 @@ export function tilePolygons(polygons: Float64Array[], bounds: Bounds, grid = 16
   const h = Math.max(bounds.y1 - bounds.y0, 1e-9);
   const cells = new Map<number, Tile>();
   for (const p of polygons) {
-    const b = polygonBounds(p);
+    const b = loopBounds(p);
     const i = Math.min(grid - 1, Math.max(0, Math.floor((((b.x0 + b.x1) / 2 - bounds.x0) / w) * grid)));
     const j = Math.min(grid - 1, Math.max(0, Math.floor((((b.y0 + b.y1) / 2 - bounds.y0) / h) * grid)));
     const key = j * grid + i;

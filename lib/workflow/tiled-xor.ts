@@ -7,6 +7,7 @@
 import { xorLayers, type LayerXor } from '../geometry';
 import type { LayoutLibrary, LayoutPolygon } from '../layout/types';
 import { clipToBox, type Box } from './clip-to-box';
+import { loopBounds } from '../geometry/polygon-math';
 
 /** Aim for about this many vertices per box; a mask below it is compared in one pass. */
 const VERTICES_PER_TILE = 2000;
@@ -20,19 +21,6 @@ interface Indexed {
   boxes: Box[];
 }
 
-function boxOf(p: LayoutPolygon): Box {
-  let x0 = Infinity;
-  let y0 = Infinity;
-  let x1 = -Infinity;
-  let y1 = -Infinity;
-  for (let i = 0; i < p.length; i += 2) {
-    if (p[i] < x0) x0 = p[i];
-    if (p[i] > x1) x1 = p[i];
-    if (p[i + 1] < y0) y0 = p[i + 1];
-    if (p[i + 1] > y1) y1 = p[i + 1];
-  }
-  return { x0, y0, x1, y1 };
-}
 
 function topLayers(lib: LayoutLibrary): Indexed[] {
   const top = lib.cells.find((c) => c.name === lib.topCell);
@@ -41,7 +29,7 @@ function topLayers(lib: LayoutLibrary): Indexed[] {
     layer: s.layer,
     datatype: s.datatype,
     polygons: s.polygons,
-    boxes: s.polygons.map(boxOf),
+    boxes: s.polygons.map((p) => loopBounds(p)),
   }));
 }
 
