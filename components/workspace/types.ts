@@ -41,23 +41,8 @@ export interface PhaseMapRow {
   bytes: number;
 }
 
-/** Plain-JSON form of a revision summary. */
-export function toRevisionRow(r: {
-  id: string;
-  number: number;
-  authorName: string | null;
-  message: string;
-  state: string;
-  buildStatus: BuildStatus;
-  buildProgress: number;
-  buildStage: string;
-  buildError: string | null;
-  zoneCount: number | null;
-  narrowestFeature: number | null;
-  bundleBytes: number | null;
-  bundleSha256: string | null;
-  createdAt: Date | string;
-}): RevisionRow {
+/** Plain-JSON form of a revision summary; copies the listed fields only, so database rows can be passed as they are. */
+export function toRevisionRow(r: Omit<RevisionRow, 'createdAt'> & { createdAt: Date | string }): RevisionRow {
   return {
     id: r.id,
     number: r.number,
