@@ -19,29 +19,26 @@ function optionText(r: PickableRevision): string {
 export function RevisionPicker({ revisions, a, b }: { revisions: PickableRevision[]; a: string; b: string }) {
   return (
     <form method="get" action="/compare" className="flex flex-wrap items-end gap-3" aria-label="Choose revisions">
-      <label className="flex flex-col gap-1 text-sm">
-        <span className="font-medium">A (before)</span>
-        <Select name="a" defaultValue={a} className="w-72">
-          {revisions.map((r) => (
-            <option key={r.id} value={r.id}>
-              {optionText(r)}
-            </option>
-          ))}
-        </Select>
-      </label>
-      <label className="flex flex-col gap-1 text-sm">
-        <span className="font-medium">B (after)</span>
-        <Select name="b" defaultValue={b} className="w-72">
-          {revisions.map((r) => (
-            <option key={r.id} value={r.id}>
-              {optionText(r)}
-            </option>
-          ))}
-        </Select>
-      </label>
+      <RevisionSelect name="a" caption="A (before)" value={a} revisions={revisions} />
+      <RevisionSelect name="b" caption="B (after)" value={b} revisions={revisions} />
       <button type="submit" className={buttonClass('secondary')}>
         Compare
       </button>
     </form>
+  );
+}
+
+function RevisionSelect({ name, caption, value, revisions }: { name: 'a' | 'b'; caption: string; value: string; revisions: PickableRevision[] }) {
+  return (
+    <label className="flex flex-col gap-1 text-sm">
+      <span className="font-medium">{caption}</span>
+      <Select name={name} defaultValue={value} className="w-72">
+        {revisions.map((r) => (
+          <option key={r.id} value={r.id}>
+            {optionText(r)}
+          </option>
+        ))}
+      </Select>
+    </label>
   );
 }

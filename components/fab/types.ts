@@ -1,4 +1,4 @@
-import type { BundleLayer } from '@/db/queries/fab';
+import type { BundleLayer, FabPhotoSummary, FabRunView } from '@/db/queries/fab';
 import type { ProcessProfile } from '@/lib/schemas/designs';
 
 export interface FabItemView {
@@ -18,17 +18,5 @@ export interface FabItemView {
   createdAt: string;
 }
 
-export interface FabRunRow {
-  id: string;
-  revisionId: string;
-  runDate: string;
-  tool: string;
-  dose: number;
-  doseUnit: string;
-  focus: number;
-  resist: string;
-  resistThickness: number;
-  notes: string;
-  recordedByName: string | null;
-  photos: { id: string; fileName: string; width: number; height: number }[];
-}
+/** A recorded run as the page hands it to the client: the query's view without the record time, photos without their MIME type. */
+export type FabRunRow = Omit<FabRunView, 'createdAt' | 'photos'> & { photos: Omit<FabPhotoSummary, 'mimeType'>[] };

@@ -1,14 +1,7 @@
 import type { CompiledDesign, PhaseField, Quantization, Region } from '@/lib/design/types';
 
-/**
- * Hand-built designs for the geometry tests: the exact hyperbolic lens phase
- * φ = −(2π/λ)(√(ρ² + f²) − f) focusing a plane wave to (x0, y0, f) (textbook optics, from memory),
- * with its exact spatial-frequency bound ρ/(λ√(ρ² + f²)) taken at the box's farthest point.
- */
-export function lensField(wavelength: number, focalLength: number, x0 = 0, y0 = 0): PhaseField {
-  const k = (2 * Math.PI) / wavelength;
-  const f2 = focalLength * focalLength;
-  const phase = (x: number, y: number) => -k * (Math.sqrt((x - x0) ** 2 + (y - y0) ** 2 + f2) - focalLength);
+/** The unit-modulus field exp(i·phase) of a phase function, single and row-wise. */
+function unitField(phase: (x: number, y: number) => number): Pick<PhaseField, 'phase' | 'field' | 'fieldRow'> {
   return {
     phase,
     field(x, y, out) {
@@ -23,6 +16,20 @@ export function lensField(wavelength: number, focalLength: number, x0 = 0, y0 = 
         im[i] = Math.sin(p);
       }
     },
+  };
+}
+
+/**
+ * Hand-built designs for the geometry tests: the exact hyperbolic lens phase
+ * φ = −(2π/λ)(√(ρ² + f²) − f) focusing a plane wave to (x0, y0, f) (textbook optics, from memory),
+ * with its exact spatial-frequency bound ρ/(λ√(ρ² + f²)) taken at the box's farthest point.
+ */
+export function lensField(wavelength: number, focalLength: number, x0 = 0, y0 = 0): PhaseField {
+  const k = (2 * Math.PI) / wavelength;
+  const f2 = focalLength * focalLength;
+  const phase = (x: number, y: number) => -k * (Math.sqrt((x - x0) ** 2 + (y - y0) ** 2 + f2) - focalLength);
+  return {
+    ...unitField(phase),
     maxSpatialFrequency(bx0, by0, bx1, by1) {
       const dx = Math.max(Math.abs(bx0 - x0), Math.abs(bx1 - x0));
       const dy = Math.max(Math.abs(by0 - y0), Math.abs(by1 - y0));
@@ -71,19 +78,7 @@ export function combinedField(parts: { field: PhaseField; weight: number }[]): P
 export function vortexField(charge: number, x0 = 0, y0 = 0): PhaseField {
   const phase = (x: number, y: number) => charge * Math.atan2(y - y0, x - x0);
   return {
-    phase,
-    field(x, y, out) {
-      const p = phase(x, y);
-      out[0] = Math.cos(p);
-      out[1] = Math.sin(p);
-    },
-    fieldRow(y, xs, re, im) {
-      for (let i = 0; i < xs.length; i++) {
-        const p = phase(xs[i], y);
-        re[i] = Math.cos(p);
-        im[i] = Math.sin(p);
-      }
-    },
+    ...unitField(phase),
     maxSpatialFrequency(bx0, by0, bx1, by1) {
       // |∇(ℓθ)| = |ℓ|/ρ, largest at the box point nearest the centre
       const dx = Math.max(bx0 - x0, 0, x0 - bx1);
