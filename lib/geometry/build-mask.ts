@@ -6,7 +6,8 @@ import { fromPath, regionPaths } from './clip-region';
 import { GeometryError } from './errors';
 import { fracture } from './fracture';
 import { resolveMaskOptions, type MaskOptions } from './options';
-import { cleanLoop, loopBounds } from './polygon-math';
+import { narrowCandidates } from './narrow-candidates';
+import { cleanLoop } from './polygon-math';
 import { regionBox, validateRegion } from './region';
 import { buildReport, type DrawnLayer } from './report';
 import type { ManufacturabilityReport } from './report-types';
@@ -49,19 +50,11 @@ function toLayout(loops: Float64Array[]): LayoutPolygon[] {
 export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles: MaskTileResult[]): MaskResult {
   const infos = maskLayers(design, options);
   const phaseGap = layerFunctionSpecs(design.quantization).map((s) => s.phaseGap);
-  const gridUm = options.databaseUnit / 1e-6;
-  const drawn: DrawnLayer[] = infos.map((info, k) => {
-    const clipped = new Set(tiles.flatMap((t) => t.clipped[k]));
-    // Inside one zone the phase runs through at least phaseGap, at most 2π·F per µm: the zone is at
-    // least phaseGap/(2π·F) wide. Only cut polygons and those this bound cannot clear are opened.
-    const mayBeNarrow = (p: Float64Array) => {
-      if (clipped.has(p)) return true;
-      const b = loopBounds(p);
-      const frequency = Math.max(...design.pieces.map((piece) => piece.field.maxSpatialFrequency(b.x0 * gridUm, b.y0 * gridUm, b.x1 * gridUm, b.y1 * gridUm)));
-      return !(phaseGap[k] / (2 * Math.PI * frequency) >= options.minimumFeature);
-    };
-    return { info, polygons: tiles.flatMap((t) => t.layers[k]), mayBeNarrow };
-  });
+  const drawn: DrawnLayer[] = infos.map((info, k) => ({
+    info,
+    polygons: tiles.flatMap((t) => t.layers[k]),
+    mayBeNarrow: narrowCandidates(design, options, phaseGap[k], new Set(tiles.flatMap((t) => t.clipped[k]))),
+  }));
   const report = buildReport(design, options, drawn, designAnchor(design));
   const scale = 1e-6 / options.databaseUnit;
   const shapes = drawn.map((d) => ({ layer: d.info.layer, datatype: d.info.datatype, polygons: toLayout(d.polygons) }));
