@@ -4,7 +4,7 @@
  * (run by tsx) and the job tests.
  */
 import path from 'node:path';
-import { Worker } from 'node:worker_threads';
+import { startTypeScriptWorker } from '../threads/typescript-worker';
 import { ExportRefused, type ProgressReporter } from './export-job';
 import type { ThreadMessage } from './task-thread';
 
@@ -28,10 +28,7 @@ const THREAD_ENTRY = path.join(__dirname, 'task-thread.ts');
 export function threadedTask<I, O>({ modulePath, exportName, budgetMs, heapMb = 3072, what }: ThreadedTaskOptions): ThreadedTask<I, O> {
   return (input, onProgress) =>
     new Promise<O>((resolve, reject) => {
-      // The thread is a fresh JavaScript context; it loads TypeScript the way the parent does (tsx).
-      const bootstrap = `require(${JSON.stringify(require.resolve('tsx/cjs/api'))}).register(); require(${JSON.stringify(THREAD_ENTRY)});`;
-      const worker = new Worker(bootstrap, {
-        eval: true,
+      const worker = startTypeScriptWorker(THREAD_ENTRY, {
         workerData: { modulePath, exportName, input },
         resourceLimits: { maxOldGenerationSizeMb: heapMb },
       });
