@@ -5,6 +5,9 @@ export const PAPER = '#f7f7f2';
 export const HAIRLINE = '#d9d6cc';
 export const INK = '#14213d';
 export const WARNING = '#d95f02';
+/** Differences between revisions: added teal, removed amber (never red against green). */
+export const ADDED = '#1b9e77';
+export const REMOVED = '#d95f02';
 
 /**
  * Hues for layers after the first, from the Okabe–Ito colour-blind-safe palette

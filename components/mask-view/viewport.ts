@@ -7,6 +7,16 @@ export interface Viewport {
   pxPerUm: number;
 }
 
+/** The zoom range a view keeps to, in px/µm. */
+export interface ZoomLimits {
+  min: number;
+  max: number;
+}
+
+export function clampZoom(pxPerUm: number, limits: ZoomLimits): number {
+  return Math.min(limits.max, Math.max(limits.min, pxPerUm));
+}
+
 /** Screen pixels (y down, origin top-left) from mask-plane µm (y up). */
 export function toScreen(v: Viewport, width: number, height: number, x: number, y: number): [number, number] {
   return [width / 2 + (x - v.cx) * v.pxPerUm, height / 2 - (y - v.cy) * v.pxPerUm];
@@ -33,15 +43,65 @@ export function zoomAt(
   sx: number,
   sy: number,
   factor: number,
-  limits: { min: number; max: number },
+  limits: ZoomLimits,
 ): Viewport {
-  const pxPerUm = Math.min(limits.max, Math.max(limits.min, v.pxPerUm * factor));
+  const pxPerUm = clampZoom(v.pxPerUm * factor, limits);
   const [mx, my] = toMask(v, width, height, sx, sy);
   return {
     pxPerUm,
     cx: mx - (sx - width / 2) / pxPerUm,
     cy: my + (sy - height / 2) / pxPerUm,
   };
+}
+
+/** The view after dragging the picture by (dx, dy) screen pixels: the grabbed mask point follows the pointer. */
+export function panBy(v: Viewport, dx: number, dy: number): Viewport {
+  return { ...v, cx: v.cx - dx / v.pxPerUm, cy: v.cy + dy / v.pxPerUm };
+}
+
+/** How far a view may zoom (px/µm): out to half the fit, in to `maxPxPerUm` but never less than the fit. */
+export function zoomLimits(fitPxPerUm: number, maxPxPerUm = fitPxPerUm * 1e5): ZoomLimits {
+  return { min: fitPxPerUm / 2, max: Math.max(fitPxPerUm, maxPxPerUm) };
+}
+
+export const ZOOM_STEP = 1.5;
+/** How far one arrow key moves the picture, in screen pixels. */
+export const KEY_PAN_PX = 60;
+
+/**
+ * What a key does to the view: + (or =) and − zoom about the centre, arrows move the view by
+ * KEY_PAN_PX, 0 asks for the fitted view; null for every other key.
+ */
+export function viewForKey(v: Viewport, key: string, width: number, height: number, limits: ZoomLimits): Viewport | 'fit' | null {
+  switch (key) {
+    case '+':
+    case '=':
+      return zoomAt(v, width, height, width / 2, height / 2, ZOOM_STEP, limits);
+    case '-':
+      return zoomAt(v, width, height, width / 2, height / 2, 1 / ZOOM_STEP, limits);
+    // An arrow shows more of the mask on its side, so the picture moves the other way.
+    case 'ArrowLeft':
+      return panBy(v, KEY_PAN_PX, 0);
+    case 'ArrowRight':
+      return panBy(v, -KEY_PAN_PX, 0);
+    case 'ArrowUp':
+      return panBy(v, 0, KEY_PAN_PX);
+    case 'ArrowDown':
+      return panBy(v, 0, -KEY_PAN_PX);
+    case '0':
+      return 'fit';
+    default:
+      return null;
+  }
+}
+
+/**
+ * The canvas transform [a, b, c, d, e, f] (as `setTransform` takes it) that draws mask-plane µm (y up)
+ * into a backing store of `dpr` device pixels per screen pixel: device = dpr · toScreen(x, y).
+ */
+export function worldToCanvas(v: Viewport, width: number, height: number, dpr: number): [number, number, number, number, number, number] {
+  const s = v.pxPerUm;
+  return [dpr * s, 0, 0, -dpr * s, dpr * (width / 2 - s * v.cx), dpr * (height / 2 + s * v.cy)];
 }
 
 /** The mask-plane box visible on screen. */
