@@ -7,6 +7,27 @@ export interface BundleFile {
   sha256: string;
 }
 
+/** One exposure-matrix column as drawn: its variant and figures measured on its own geometry (after its bias). */
+export interface MatrixColumnManifest {
+  caption: string;
+  /** binary duty cycle of the column; null keeps the design's */
+  duty: number | null;
+  /** size bias, µm: the change in width of every drawn feature (see biasConvention); null for none */
+  bias_um: number | null;
+  /** drawn zone or level layers of the column's cell */
+  layers: Array<{ layer: number; datatype: number; polygons: number; vertices: number; drawnArea_um2: number }>;
+  /** as the report's openAreaFraction, measured on this column's polygons */
+  openAreaFraction: number;
+  /** drawn shapes (zones) a negative bias erased */
+  zonesLost: number;
+  /** drawn shapes (zones) a positive bias joined to a neighbour */
+  zonesMerged: number;
+  /** the report's narrowest zone and smallest gap (16 rays) shifted by +bias and −bias; null when none is left */
+  narrowestZone_um: number | null;
+  smallestGap_um: number | null;
+  warnings: string[];
+}
+
 /** manifest.json: everything a reader needs to interpret the other files of the bundle. */
 export interface BundleManifest {
   format: 'zonewright-bundle/1';
@@ -26,7 +47,14 @@ export interface BundleManifest {
   quantization: Quantization;
   layers: Array<{ layer: number; datatype: number; name: string; purpose: string } & LayerMeaning>;
   foci: DesignedFocus[];
-  exposureMatrix: { columns: string[]; rows: string[] } | null;
+  exposureMatrix: {
+    /** the column captions, left to right */
+    columns: string[];
+    rows: string[];
+    /** what a column's bias_um means, in words */
+    biasConvention: string;
+    variants: MatrixColumnManifest[];
+  } | null;
   topCell: string;
   report: unknown;
   files: BundleFile[];

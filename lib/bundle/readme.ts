@@ -31,7 +31,14 @@ export function fabReadme(manifest: Omit<BundleManifest, 'files'>, files: readon
     `  Process minimum feature: ${manifest.settings.minimumFeatureMicrometres} µm. Features narrower than this are listed as`,
     '  warnings in the report below and in manifest.json; check them before exposure.',
     ...(manifest.exposureMatrix
-      ? ['', 'EXPOSURE MATRIX', `  Columns: ${manifest.exposureMatrix.columns.join(' | ')}`, `  Rows:    ${manifest.exposureMatrix.rows.join(' | ')}`, '  Each element carries its label; expose each row at the dose its label names.']
+      ? [
+          '',
+          'EXPOSURE MATRIX',
+          `  Columns: ${manifest.exposureMatrix.columns.join(' | ')}`,
+          `  Rows:    ${manifest.exposureMatrix.rows.join(' | ')}`,
+          '  Each element carries its label; expose each row at the dose its label names.',
+          ...(manifest.exposureMatrix.variants.some((v) => v.bias_um !== null) ? [`  Size bias (µm, drawn in the columns' geometry): ${manifest.exposureMatrix.biasConvention}`] : []),
+        ]
       : []),
     '',
     'REPORT',

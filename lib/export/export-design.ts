@@ -16,6 +16,7 @@ import { ENGINE_VERSION } from './engine-version';
 import { ExportError, formatDiagnostics } from './errors';
 import { resolveExportOptions, type ExportOptions, type ResolvedExportOptions } from './export-options';
 import { libraryName } from './library-name';
+import { BIAS_CONVENTION, defaultCaption, matrixColumn, matrixColumnLines } from './matrix-columns';
 import { reportLines } from './report-lines';
 
 export interface ExportResult {
@@ -23,7 +24,7 @@ export interface ExportResult {
   /** of the zip */
   sha256: string;
   manifest: BundleManifest;
-  /** the manufacturability report of the design (of the first column for a matrix) */
+  /** the manufacturability report of the design (of the first column for a matrix, before its size bias; manifest.exposureMatrix.variants has each column's figures) */
   report: ManufacturabilityReport;
   /** every file in the zip, manifest.json included */
   files: BundleFile[];
@@ -61,8 +62,9 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
     }
     return mask;
   });
+  const columns = settings.matrix ? biasedColumns(built, design, settings) : null;
   const labelLayer = built[0].library.layers.find((l) => l.purpose === 'label') ?? settings.layers.labels;
-  const labelled = built.map(({ library }) => addLabels(library, design.labels, font, labelLayer, settings.chordTolerance));
+  const labelled = (columns ?? built).map(({ library }) => addLabels(library, design.labels, font, labelLayer, settings.chordTolerance));
 
   settings.onProgress(0.75, 'labels and layout');
   const library = settings.matrix ? matrixLibrary(labelled, settings, name, font, labelLayer) : labelled[0];
@@ -83,7 +85,7 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
 
   settings.onProgress(0.9, 'bundle');
   const report = built[0].report;
-  const summary = reportLines(report, library, vertices);
+  const summary = [...reportLines(report, library, vertices), ...(columns ? matrixColumnLines(columns.map((c) => c.entry)) : [])];
   const manifestBody: Omit<BundleManifest, 'files'> = {
     format: 'zonewright-bundle/1',
     design: { name: settings.designName, id: settings.designId },
@@ -102,7 +104,8 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
     quantization: design.quantization,
     layers: library.layers.map((l) => ({ layer: l.layer, datatype: l.datatype, name: l.name, purpose: l.purpose, ...layerMeaning(l, design.quantization, design.wavelength) })),
     foci: design.foci,
-    exposureMatrix: settings.matrix ? { columns: columnCaptions(settings), rows: settings.matrix.rows } : null,
+    exposureMatrix:
+      settings.matrix && columns ? { columns: columnCaptions(settings), rows: settings.matrix.rows, biasConvention: BIAS_CONVENTION, variants: columns.map((c) => c.entry) } : null,
     topCell: library.topCell,
     report,
   };
@@ -124,6 +127,16 @@ function variantDesigns(design: CompiledDesign, settings: ResolvedExportOptions)
     if (column.duty === undefined) return design;
     if (quantization.kind !== 'binary') throw new ExportError('options', 'duty-cycle columns need a binary design; this design is multi-level');
     return { ...design, quantization: { ...quantization, duty: column.duty } };
+  });
+}
+
+/** Each matrix column's size bias applied and its figures measured (see matrix-columns.ts). */
+function biasedColumns(built: Array<{ library: LayoutLibrary; report: ManufacturabilityReport }>, design: CompiledDesign, settings: ResolvedExportOptions) {
+  const captions = columnCaptions(settings);
+  return built.map((mask, index) => {
+    const column = settings.matrix!.columns[index];
+    if (column.bias) settings.onProgress(0.7, `size bias, column ${index + 1} of ${built.length}`);
+    return matrixColumn(mask, column, captions[index], design, settings);
   });
 }
 
@@ -151,8 +164,8 @@ function matrixLibrary(variants: LayoutLibrary[], settings: ResolvedExportOption
   const captions = columnCaptions(settings);
   const tag = `${settings.designName.slice(0, 16)}${settings.revision === null ? '' : ` r${settings.revision}`}`;
   const databaseUnit = settings.databaseUnit;
-  // identical columns (no duty overrides) share one cell, so the matrix becomes one array
-  const same = matrix.columns.every((c) => c.duty === undefined);
+  // identical columns (no duty or bias) share one cell, so the matrix becomes one array
+  const same = matrix.columns.every((c) => c.duty === undefined && !c.bias);
   try {
     return buildExposureMatrix({
       name: `${name.slice(0, 21)}_MX`,
@@ -170,7 +183,7 @@ function matrixLibrary(variants: LayoutLibrary[], settings: ResolvedExportOption
 }
 
 function columnCaptions(settings: ResolvedExportOptions): string[] {
-  return (settings.matrix?.columns ?? []).map((c, i) => c.caption ?? (c.duty !== undefined ? `duty ${c.duty}` : `C${i + 1}`));
+  return (settings.matrix?.columns ?? []).map((c, i) => c.caption ?? defaultCaption(c, i));
 }
 
 /** Runs a writer, turning its layout refusals (names, vertex limits) into export errors. */

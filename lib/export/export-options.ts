@@ -3,8 +3,11 @@ import type { PhaseMap } from '../phasemap/types';
 import { ExportError } from './errors';
 
 export interface ExposureMatrixRequest {
-  /** one entry per column; `duty` overrides the binary duty cycle of that column */
-  columns: Array<{ duty?: number; caption?: string }>;
+  /**
+   * one entry per column; `duty` overrides the binary duty cycle of that column; `bias` (µm, signed) is
+   * a size bias: every drawn edge moves outward by bias/2, so drawn features widen by `bias`
+   */
+  columns: Array<{ duty?: number; bias?: number; caption?: string }>;
   /** one caption per row, e.g. "D 100%" */
   rows: string[];
 }
@@ -87,6 +90,13 @@ export function resolveExportOptions(options: ExportOptions): ResolvedExportOpti
     if (columns.length < 1 || rows.length < 1 || columns.length * rows.length > 400) problems.push('an exposure matrix needs 1 or more columns and rows, at most 400 elements');
     for (const column of columns) {
       if (column.duty !== undefined && !(column.duty > 0 && column.duty < 1)) problems.push(`a matrix column's duty cycle must lie strictly between 0 and 1, got ${column.duty}`);
+      if (column.bias !== undefined) {
+        const steps = column.bias / 2 / resolved.databaseUnit;
+        if (!Number.isFinite(column.bias)) problems.push(`a matrix column's size bias must be a finite length in µm, got ${column.bias}`);
+        else if (Math.abs(steps - Math.round(steps)) > 1e-6) {
+          problems.push(`a matrix column's size bias of ${column.bias} µm moves each edge by ${Number((column.bias / 2).toPrecision(12))} µm, not a whole number of database grid steps (${resolved.databaseUnit} µm); use a multiple of ${2 * resolved.databaseUnit} µm`);
+        }
+      }
     }
     for (const caption of [...rows, ...columns.map((c) => c.caption ?? '')]) {
       if (!/^[\x20-\x7e]{0,40}$/.test(caption)) problems.push(`matrix caption "${caption}" must be at most 40 printable ASCII characters`);

@@ -21,6 +21,9 @@ options:
   --revision N             revision number for the manifest and labels
   --date ISO-DATE          date written into the files (default: now), for reproducible bundles
   --matrix-duty LIST       exposure matrix: one column per duty cycle, e.g. 0.4,0.5,0.6
+  --matrix-bias LIST       exposure matrix: one column per size bias in µm, signed, e.g. -0.1,0,0.1;
+                           every drawn edge moves out by bias/2, so zones widen by the bias and gaps
+                           narrow by it (the usual meaning); with --matrix-duty, one bias per duty
   --matrix-rows LIST       exposure matrix: one row per caption, e.g. "D 90%,D 100%,D 110%"
   --cblock                 compress the OASIS cells with CBLOCKs (raw DEFLATE)
 
@@ -44,13 +47,21 @@ function parseWhole(text: string, flag: string): number {
   return Number(text);
 }
 
+function numberList(text: string, flag: string): number[] {
+  return text.split(',').map((item) => {
+    const value = Number(item);
+    if (item.trim() === '' || !Number.isFinite(value)) throw new UsageError(`${flag} needs numbers separated by commas; got "${text}"`);
+    return value;
+  });
+}
+
 interface Parsed {
   script: string;
   out: string;
   options: Omit<ExportOptions, 'font'>;
 }
 
-const VALUE_FLAGS = new Set(['--out', '--tolerance', '--grid', '--max-vertices', '--vertex-budget', '--minimum-feature', '--name', '--revision', '--date', '--matrix-duty', '--matrix-rows']);
+const VALUE_FLAGS = new Set(['--out', '--tolerance', '--grid', '--max-vertices', '--vertex-budget', '--minimum-feature', '--name', '--revision', '--date', '--matrix-duty', '--matrix-bias', '--matrix-rows']);
 
 export function parseExportArgs(args: string[]): Parsed {
   const values = new Map<string, string>();
@@ -87,15 +98,16 @@ export function parseExportArgs(args: string[]): Parsed {
     options.timestamp = date;
   }
   const duties = get('--matrix-duty');
+  const biases = get('--matrix-bias');
   const rows = get('--matrix-rows');
-  if (duties || rows) {
-    const columns = duties
-      ? duties.split(',').map((d) => {
-          const duty = Number(d);
-          if (d.trim() === '' || !Number.isFinite(duty)) throw new UsageError(`--matrix-duty needs numbers separated by commas; got "${duties}"`);
-          return { duty };
-        })
-      : [{}];
+  if (duties || biases || rows) {
+    const dutyList = duties ? numberList(duties, '--matrix-duty') : null;
+    const biasList = biases ? numberList(biases, '--matrix-bias') : null;
+    if (dutyList && biasList && dutyList.length !== biasList.length) {
+      throw new UsageError(`--matrix-duty and --matrix-bias give one value per column, so they need the same length; got ${dutyList.length} duty cycles and ${biasList.length} biases`);
+    }
+    const count = dutyList?.length ?? biasList?.length ?? 1;
+    const columns = Array.from({ length: count }, (_, i) => ({ ...(dutyList ? { duty: dutyList[i] } : {}), ...(biasList ? { bias: biasList[i] } : {}) }));
     options.matrix = { columns, rows: rows ? rows.split(',').map((r) => r.trim()) : [''] };
   }
   return { script, out, options };
