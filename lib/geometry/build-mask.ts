@@ -8,6 +8,7 @@ import { fracture } from './fracture';
 import { resolveMaskOptions, type MaskOptions } from './options';
 import { narrowCandidates } from './narrow-candidates';
 import { cleanLoop } from './polygon-math';
+import { radialMaskTiles } from './radial-mask';
 import { regionBox, validateRegion } from './region';
 import { buildReport, type DrawnLayer } from './report';
 import type { ManufacturabilityReport } from './report-types';
@@ -88,6 +89,6 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
 export function buildMask(design: CompiledDesign, options: Partial<MaskOptions> = {}): MaskResult {
   const resolved = resolveMaskOptions(options);
   validateDesign(design);
-  const tiles = planMaskTiles(design, resolved.chordTolerance).map((plan) => buildMaskTile(design, resolved, plan));
+  const tiles = radialMaskTiles(design, resolved) ?? planMaskTiles(design, resolved.chordTolerance).map((plan) => buildMaskTile(design, resolved, plan));
   return assembleMask(design, resolved, tiles);
 }

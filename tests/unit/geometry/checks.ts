@@ -1,4 +1,6 @@
 import ClipperLib from 'clipper-lib';
+import type { CompiledDesign } from '@/lib/design/types';
+import { assembleMask, buildMaskTile, planMaskTiles, resolveMaskOptions, type MaskOptions, type MaskResult } from '@/lib/geometry';
 import type { LayoutLibrary, LayoutPolygon } from '@/lib/layout/types';
 
 /** Independent helpers for the geometry tests (plain textbook algorithms, written for the tests). */
@@ -92,4 +94,10 @@ export function rng(seed: number): () => number {
     s = (s * 1664525 + 1013904223) >>> 0;
     return s / 2 ** 32;
   };
+}
+
+/** The contour tracer on its own, without the exact path buildMask takes for rotationally symmetric designs. */
+export function traceMask(d: CompiledDesign, options: Partial<MaskOptions> = {}): MaskResult {
+  const resolved = resolveMaskOptions(options);
+  return assembleMask(d, resolved, planMaskTiles(d, resolved.chordTolerance).map((plan) => buildMaskTile(d, resolved, plan)));
 }

@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { buildMask } from '@/lib/geometry';
+import { buildMask, type MaskResult } from '@/lib/geometry';
 import { compileScript } from '@/lib/lang';
 import type { CompiledDesign } from '@/lib/design/types';
-import { area, zonePolygons } from './checks';
+import { area, traceMask, zonePolygons } from './checks';
 import { binary, design, lensField } from './fixtures';
 
 /**
@@ -26,9 +26,14 @@ function edgeIndices(phaseOffset: number, duty: number, mMax: number): number[] 
 
 const radius = (m: number, wavelength: number, f: number) => Math.sqrt(m * wavelength * f + (m * wavelength / 2) ** 2);
 
-function checkRadiiAndArea(d: CompiledDesign, f: number, R: number) {
+const PATHS: Array<[string, (d: CompiledDesign) => MaskResult]> = [
+  ['circles written from the radii (buildMask)', (d) => buildMask(d)],
+  ['contour tracer', (d) => traceMask(d)],
+];
+
+function checkRadiiAndArea(d: CompiledDesign, f: number, R: number, build: (d: CompiledDesign) => MaskResult) {
   if (d.quantization.kind !== 'binary') throw new Error('binary design expected');
-  const { library } = buildMask(d);
+  const { library } = build(d);
   const polygons = zonePolygons(library);
   const lambda = d.wavelength;
   const mMax = (2 * (Math.sqrt(R * R + f * f) - f)) / lambda + 2;
@@ -59,14 +64,14 @@ function checkRadiiAndArea(d: CompiledDesign, f: number, R: number) {
   return { polygons, edges };
 }
 
-describe('zone radii against the zone-plate construction', () => {
+describe.each(PATHS)('zone radii against the zone-plate construction, %s', (_, build) => {
   it('single-focus-405.zw: every vertex on a zone radius or the aperture edge, open area as analytic', () => {
     const compiled = compileScript(readFileSync('examples/single-focus-405.zw', 'utf8'));
     expect(compiled.ok).toBe(true);
     if (!compiled.ok) return;
     // the example: λ = 405 nm, f = 1 mm, aperture diameter 460 µm (from its script)
     expect(compiled.design.wavelength).toBeCloseTo(0.405, 12);
-    checkRadiiAndArea(compiled.design, 1000, 230);
+    checkRadiiAndArea(compiled.design, 1000, 230, build);
   });
 
   it('a hand-built plate whose edges fall on whole-number zones (φ0 = −π/2) matches r_n² = nλf + (nλ/2)²', () => {
@@ -75,6 +80,6 @@ describe('zone radii against the zone-plate construction', () => {
     const d = design(lensField(0.405, f), { kind: 'circle', cx: 0, cy: 0, r: R }, binary(0.5, -Math.PI / 2), { symmetryCentre: { x: 0, y: 0 } });
     // with φ0 = −π/2 and duty ½ the edges are the whole-number zones n = 0, 1, 2, …
     expect(edgeIndices(-Math.PI / 2, 0.5, 4)).toEqual([0, 1, 2, 3, 4].map((n) => expect.closeTo(n, 12)));
-    checkRadiiAndArea(d, f, R);
+    checkRadiiAndArea(d, f, R, build);
   });
 });

@@ -1,0 +1,149 @@
+import type { CompiledDesign } from '../design/types';
+import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
+import type { MaskTileResult } from './build-tile';
+import type { MaskOptions } from './options';
+import { snapLoop } from './polygon-math';
+import { scanSegment } from './scan-segment';
+
+/** One drawn annulus a ≤ r ≤ b about the centre; a = 0 is a disc. */
+interface DrawnBand {
+  inner: number;
+  outer: number;
+  /** the band ends on the aperture's edge (inner or outer) */
+  onApertureEdge: boolean;
+}
+
+/** Fewest chord segments on a full circle of radius r sagging at most `tolerance` (same rule as the aperture's inscribed polygon). */
+function chordCount(r: number, tolerance: number): number {
+  return Math.ceil(Math.PI / Math.acos(Math.max(-1, 1 - tolerance / r)));
+}
+
+/**
+ * The drawn bands along one radius: every sign change of g between the aperture's inner and outer
+ * radius is found by scan-segment.ts (its sampling guarantee holds on the ray) and refined onto the
+ * zero of g, so each band edge is a radius of the true level set.
+ */
+function drawnBands(g: (x: number, y: number) => number, design: CompiledDesign, phaseGap: number, innerRadius: number, outerRadius: number, tolerance: number): DrawnBand[] {
+  const centre = design.symmetryCentre!;
+  const field = design.pieces[0].field;
+  const span = outerRadius - innerRadius;
+  const found = scanSegment(g, field, phaseGap, centre.x + innerRadius, centre.y, centre.x + outerRadius, centre.y, tolerance);
+  const edges = [innerRadius, ...found.t.map((t) => innerRadius + t * span), outerRadius];
+  const bands: DrawnBand[] = [];
+  for (let i = 0; i + 1 < edges.length; i++) {
+    const a = edges[i];
+    const b = edges[i + 1];
+    // the state between two consecutive crossings is the sign of g in the middle
+    if (!(b > a) || !(g(centre.x + 0.5 * (a + b), centre.y) > 0)) continue;
+    const last = bands[bands.length - 1];
+    if (last && last.outer === a) last.outer = b;
+    else bands.push({ inner: a, outer: b, onApertureEdge: false });
+  }
+  for (const band of bands) band.onApertureEdge = band.outer === outerRadius || (innerRadius > 0 && band.inner === innerRadius);
+  return bands;
+}
+
+/**
+ * Cuts one band into `sectors` equal pieces (cuts along radii from angle 0, like the quadrant tiles
+ * of the traced path) with `perSector` chords on each arc; a disc becomes pie slices, or one polygon
+ * when it fits the vertex limit whole. Loops are counter-clockwise, in database units.
+ */
+function bandPolygons(cx: number, cy: number, band: DrawnBand, sectors: number, perSector: number, scale: number): Float64Array[] {
+  const n = sectors * perSector;
+  // both arcs of a band share one table of directions
+  const cos = new Float64Array(n + 1);
+  const sin = new Float64Array(n + 1);
+  for (let i = 0; i <= n; i++) {
+    cos[i] = Math.cos((2 * Math.PI * i) / n);
+    sin[i] = Math.sin((2 * Math.PI * i) / n);
+  }
+  const point = (r: number, i: number, out: Float64Array, at: number) => {
+    out[at] = cx + r * cos[i];
+    out[at + 1] = cy + r * sin[i];
+  };
+  const loops: Float64Array[] = [];
+  if (band.inner === 0 && sectors === 1) {
+    const loop = new Float64Array(2 * n);
+    for (let i = 0; i < n; i++) point(band.outer, i, loop, 2 * i);
+    loops.push(loop);
+  } else {
+    for (let s = 0; s < sectors; s++) {
+      const first = s * perSector;
+      const innerCount = band.inner === 0 ? 1 : perSector + 1;
+      const loop = new Float64Array(2 * (perSector + 1 + innerCount));
+      let k = 0;
+      for (let i = 0; i <= perSector; i++, k += 2) point(band.outer, first + i, loop, k);
+      if (band.inner === 0) {
+        loop[k] = cx;
+        loop[k + 1] = cy;
+      } else {
+        for (let i = perSector; i >= 0; i--, k += 2) point(band.inner, first + i, loop, k);
+      }
+      loops.push(loop);
+    }
+  }
+  return loops.map((l) => snapLoop(l, scale)).filter((l): l is Float64Array => l !== null);
+}
+
+/** Sector count (1 for a whole disc, else a multiple of 4) and chords per sector arc keeping every piece within the vertex limit. */
+function sectorLayout(band: DrawnBand, tolerance: number, maxVertices: number): { sectors: number; perSector: number } {
+  // the outer arc sets the chord count; the inner arc reuses it, so its chords sag even less
+  const chords = Math.max(16, chordCount(band.outer, tolerance));
+  if (band.inner === 0 && chords <= maxVertices) return { sectors: 1, perSector: chords };
+  for (let sectors = 4; ; sectors += 4) {
+    const perSector = Math.ceil(chords / sectors);
+    const vertices = band.inner === 0 ? perSector + 2 : 2 * (perSector + 1);
+    if (vertices <= maxVertices) return { sectors, perSector };
+  }
+}
+
+/**
+ * Whether the field looks like one wave (|u| = 1) along the ray. The ray scan's one-crossing-per-step
+ * guarantee is proven for single waves only; combinations (|u| varies, may vanish) go to the tracer,
+ * which repairs crossings that slip between samples near zeros of u.
+ */
+function unitModulusOnRay(design: CompiledDesign, innerRadius: number, outerRadius: number): boolean {
+  const centre = design.symmetryCentre!;
+  const out = new Float64Array(2);
+  for (let i = 0; i <= 64; i++) {
+    design.pieces[0].field.field(centre.x + innerRadius + ((outerRadius - innerRadius) * i) / 64, centre.y, out);
+    if (Math.abs(Math.hypot(out[0], out[1]) - 1) > 1e-9) return false;
+  }
+  return true;
+}
+
+/**
+ * The exact path for a rotationally symmetric design (one profile symmetric about the centre of a
+ * disc or ring aperture): every zone boundary is a circle, so its radius is found once along a ray
+ * and the polygons are written straight from it, vertices on the circle and chords sagging at most
+ * the chord tolerance. The cost is the vertex count, with no tracing and no clipping (the aperture
+ * edge is itself one of the circles). Null for any other design, which goes to the tracer.
+ */
+export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): MaskTileResult[] | null {
+  const centre = design.symmetryCentre;
+  const aperture = design.aperture;
+  if (!centre || design.pieces.length !== 1 || design.pieces[0].region !== null) return null;
+  if (aperture.kind !== 'circle' && aperture.kind !== 'ring') return null;
+  if (aperture.cx !== centre.x || aperture.cy !== centre.y) return null;
+  const innerRadius = aperture.kind === 'ring' ? aperture.rInner : 0;
+  const outerRadius = aperture.kind === 'ring' ? aperture.rOuter : aperture.r;
+  if (!unitModulusOnRay(design, innerRadius, outerRadius)) return null;
+  const scale = 1e-6 / options.databaseUnit;
+  const rootTolerance = Math.min(1e-6, options.chordTolerance * 1e-3);
+  const layers: Float64Array[][] = [];
+  const clipped: Float64Array[][] = [];
+  for (const spec of layerFunctionSpecs(design.quantization)) {
+    const g = boundaryFunction(design.pieces[0].field, spec).value;
+    const drawn: Float64Array[] = [];
+    const onEdge: Float64Array[] = [];
+    for (const band of drawnBands(g, design, spec.phaseGap, innerRadius, outerRadius, rootTolerance)) {
+      const { sectors, perSector } = sectorLayout(band, options.chordTolerance, options.maxVertices);
+      const polygons = bandPolygons(centre.x, centre.y, band, sectors, perSector, scale);
+      drawn.push(...polygons);
+      if (band.onApertureEdge) onEdge.push(...polygons);
+    }
+    layers.push(drawn);
+    clipped.push(onEdge);
+  }
+  return [{ piece: 0, layers, clipped }];
+}
