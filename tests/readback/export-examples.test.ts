@@ -98,7 +98,7 @@ describe('exposure matrix bundle', () => {
       revision: 2,
       matrix: { columns: [{ duty: 0.4 }, { duty: 0.6 }], rows: ['D 90%', 'D 110%'] },
     });
-    expect(result.manifest.exposureMatrix).toEqual({ columns: ['duty 0.4', 'duty 0.6'], rows: ['D 90%', 'D 110%'] });
+    expect(result.manifest.exposureMatrix).toMatchObject({ columns: ['duty 0.4', 'duty 0.6'], rows: ['D 90%', 'D 110%'] });
     const files = await unzip(result.zip);
     const directory = scratchDirectory();
     const gds = writeScratch(directory, 'm.gds', files.get('mask.gds')!);

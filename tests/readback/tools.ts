@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 
 /** Debian's python, which has python3-gdspy; not whatever python3 is first on PATH. */
-const PYTHON = '/usr/bin/python3';
+export const PYTHON = '/usr/bin/python3';
 const here = path.dirname(new URL(import.meta.url).pathname);
 
 export function scratchDirectory(): string {
@@ -17,7 +17,7 @@ export function writeScratch(directory: string, name: string, bytes: Uint8Array)
   return file;
 }
 
-function resultLine(output: string): unknown {
+export function resultLine(output: string): unknown {
   const line = output.split('\n').find((l) => l.startsWith('RESULT '));
   if (!line) throw new Error(`no RESULT line in:\n${output}`);
   return JSON.parse(line.slice('RESULT '.length));
