@@ -1,7 +1,7 @@
 import type { CompiledDesign } from '../design/types';
 import { fabReadme, radialZones, sha256Hex, zipBundle, zoneTableCsv, layerMeaning, type BundleEntry, type BundleFile, type BundleManifest } from '../bundle';
 import { gdsiiChunks } from '../gdsii';
-import { buildMask, GeometryError, MaskOptionsError, QuantizationError, RegionError, type ManufacturabilityReport } from '../geometry';
+import { GeometryError, MaskOptionsError, QuantizationError, RegionError, resolveMaskOptions, type ManufacturabilityReport, type MaskResult } from '../geometry';
 import { compileScript } from '../lang';
 import { concatBytes } from '../layout/concat-bytes';
 import { textBytes } from '../layout/text-bytes';
@@ -16,6 +16,7 @@ import { ENGINE_VERSION } from './engine-version';
 import { ExportError, formatDiagnostics } from './errors';
 import { resolveExportOptions, type ExportOptions, type ResolvedExportOptions } from './export-options';
 import { libraryName } from './library-name';
+import { buildMaskOnThreads, phaseMapRecorder, type MaskThreadsInput } from './mask-threads';
 import { BIAS_CONVENTION, defaultCaption, matrixColumn, matrixColumnLines } from './matrix-columns';
 import { reportLines } from './report-lines';
 
@@ -45,7 +46,9 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
   const settings = resolveExportOptions(options);
   const started = Date.now();
   settings.onProgress(0, 'compiling');
-  const compiled = compileScript(source, { phaseMaps: settings.phaseMaps });
+  // the maps the script reads go to the mask tile threads, which compile it again
+  const phaseMaps = phaseMapRecorder(settings.phaseMaps);
+  const compiled = compileScript(source, { phaseMaps: phaseMaps.lookup });
   if (!compiled.ok) {
     throw new ExportError('script', `the script has errors:\n${formatDiagnostics(compiled.diagnostics)}`, compiled.diagnostics);
   }
@@ -54,14 +57,17 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
   const name = libraryName(settings.designName, settings.revision);
 
   const variants = variantDesigns(design, settings);
-  const built = variants.map((variant, index) => {
-    settings.onProgress(0.1 + (0.6 * index) / variants.length, variants.length > 1 ? `mask geometry, column ${index + 1} of ${variants.length}` : 'mask geometry');
-    const mask = buildVariant(variant, settings, variants.length > 1 ? `${name.slice(0, 20)}_C${index + 1}` : name);
+  const built: MaskResult[] = [];
+  for (const [index, variant] of variants.entries()) {
+    const stage = variants.length > 1 ? `mask geometry, column ${index + 1} of ${variants.length}` : 'mask geometry';
+    const progress = (done: number) => settings.onProgress(0.1 + (0.6 * (index + done)) / variants.length, stage);
+    progress(0);
+    const onTile = (tiles: number, total: number) => progress(tiles / total);
+    built.push(await buildVariant({ source, phaseMaps: phaseMaps.used, design: variant, onTile }, settings, variants.length > 1 ? `${name.slice(0, 20)}_C${index + 1}` : name));
     if (Date.now() - started > settings.timeBudgetMs) {
       throw new ExportError('budget', `the geometry took longer than the time budget of ${(settings.timeBudgetMs / 1000).toFixed(0)} s; use a coarser chord tolerance or a smaller aperture`);
     }
-    return mask;
-  });
+  }
   const columns = settings.matrix ? biasedColumns(built, design, settings) : null;
   const labelLayer = built[0].library.layers.find((l) => l.purpose === 'label') ?? settings.layers.labels;
   const labelled = (columns ?? built).map(({ library }) => addLabels(library, design.labels, font, labelLayer, settings.chordTolerance));
@@ -140,9 +146,10 @@ function biasedColumns(built: Array<{ library: LayoutLibrary; report: Manufactur
   });
 }
 
-function buildVariant(design: CompiledDesign, settings: ResolvedExportOptions, name: string): { library: LayoutLibrary; report: ManufacturabilityReport } {
+/** One column's mask, its tiles on `settings.threads` threads. */
+async function buildVariant(input: Omit<MaskThreadsInput, 'options' | 'threads'>, settings: ResolvedExportOptions, name: string): Promise<MaskResult> {
   try {
-    return buildMask(design, {
+    const options = resolveMaskOptions({
       databaseUnit: settings.databaseUnit * 1e-6,
       userUnit: 1e-6,
       chordTolerance: settings.chordTolerance,
@@ -151,6 +158,7 @@ function buildVariant(design: CompiledDesign, settings: ResolvedExportOptions, n
       layers: settings.layers,
       name,
     });
+    return await buildMaskOnThreads({ ...input, options, threads: settings.threads });
   } catch (error) {
     if (error instanceof MaskOptionsError) throw new ExportError('options', error.message);
     if (error instanceof QuantizationError || error instanceof RegionError) throw new ExportError('script', error.message);

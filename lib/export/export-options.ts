@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { defaultMaskOptions, type MaskLayerOptions } from '../geometry';
 import type { PhaseMap } from '../phasemap/types';
 import { ExportError } from './errors';
@@ -39,6 +40,8 @@ export interface ExportOptions {
   /** layer and datatype per purpose (the design's layer map); unset purposes keep the geometry's defaults */
   layers?: Partial<MaskLayerOptions>;
   phaseMaps?: (name: string) => PhaseMap | undefined;
+  /** worker threads for the mask tiles, 1 to 64; default: the machine's available parallelism (at most 64) */
+  threads?: number;
   onProgress?: (fraction: number, stage: string) => void;
 }
 
@@ -50,6 +53,8 @@ export interface ResolvedExportOptions extends Required<Omit<ExportOptions, 'mat
 }
 
 const NAME = /^[\x20-\x7e]{1,120}$/;
+/** each thread compiles the script and holds its own heap, so a mistyped count must not start thousands */
+const MAX_THREADS = 64;
 
 /** Fills defaults and refuses out-of-range values with one message listing every problem. */
 export function resolveExportOptions(options: ExportOptions): ResolvedExportOptions {
@@ -70,6 +75,7 @@ export function resolveExportOptions(options: ExportOptions): ResolvedExportOpti
     matrix: options.matrix ?? null,
     layers: { ...defaultMaskOptions().layers, ...options.layers },
     phaseMaps: options.phaseMaps,
+    threads: options.threads ?? Math.min(availableParallelism(), MAX_THREADS),
     onProgress: options.onProgress ?? (() => undefined),
   };
   const problems: string[] = [];
@@ -84,6 +90,7 @@ export function resolveExportOptions(options: ExportOptions): ResolvedExportOpti
   if (!Number.isInteger(resolved.vertexBudget) || resolved.vertexBudget < 1) problems.push('the vertex budget must be a positive whole number');
   if (!(resolved.timeBudgetMs > 0)) problems.push('the time budget must be positive');
   if (!(resolved.minimumFeature > 0)) problems.push('the minimum feature must be a positive length');
+  if (!Number.isInteger(resolved.threads) || resolved.threads < 1 || resolved.threads > MAX_THREADS) problems.push(`the thread count must be a whole number from 1 to ${MAX_THREADS}, got ${resolved.threads}`);
   if (!(resolved.font instanceof Uint8Array) || resolved.font.length === 0) problems.push('the label font is missing');
   if (resolved.matrix) {
     const { columns, rows } = resolved.matrix;

@@ -20,6 +20,7 @@ options:
   --name TEXT              design name for the manifest and labels (default: the file name)
   --revision N             revision number for the manifest and labels
   --date ISO-DATE          date written into the files (default: now), for reproducible bundles
+  --threads N              worker threads for the mask tiles, 1–64 (default: one per core)
   --matrix-duty LIST       exposure matrix: one column per duty cycle, e.g. 0.4,0.5,0.6
   --matrix-bias LIST       exposure matrix: one column per size bias in µm, signed, e.g. -0.1,0,0.1;
                            every drawn edge moves out by bias/2, so zones widen by the bias and gaps
@@ -61,7 +62,7 @@ interface Parsed {
   options: Omit<ExportOptions, 'font'>;
 }
 
-const VALUE_FLAGS = new Set(['--out', '--tolerance', '--grid', '--max-vertices', '--vertex-budget', '--minimum-feature', '--name', '--revision', '--date', '--matrix-duty', '--matrix-bias', '--matrix-rows']);
+const VALUE_FLAGS = new Set(['--out', '--tolerance', '--grid', '--max-vertices', '--vertex-budget', '--minimum-feature', '--name', '--revision', '--date', '--threads', '--matrix-duty', '--matrix-bias', '--matrix-rows']);
 
 export function parseExportArgs(args: string[]): Parsed {
   const values = new Map<string, string>();
@@ -91,6 +92,7 @@ export function parseExportArgs(args: string[]): Parsed {
   if (get('--max-vertices')) options.maxVertices = parseWhole(get('--max-vertices')!, '--max-vertices');
   if (get('--vertex-budget')) options.vertexBudget = parseWhole(get('--vertex-budget')!, '--vertex-budget');
   if (get('--revision')) options.revision = parseWhole(get('--revision')!, '--revision');
+  if (get('--threads')) options.threads = parseWhole(get('--threads')!, '--threads');
   if (get('--name')) options.designName = get('--name');
   if (get('--date')) {
     const date = new Date(get('--date')!);
