@@ -173,7 +173,7 @@ function tilesOnThreads(input: MaskThreadsInput, plans: MaskTilePlan[]): Promise
       const index = queue.shift();
       if (index !== undefined) worker.postMessage({ index, plan: plans[index] } satisfies TileRequest);
     };
-    for (let t = 0; t < Math.min(input.threads, plans.length); t++) {
+    const start = () => {
       const worker = startTypeScriptWorker(THREAD_ENTRY, { workerData: setup, resourceLimits: { maxOldGenerationSizeMb: TILE_HEAP_MB } });
       workers.push(worker);
       worker.on('message', (message: TileThreadMessage) => {
@@ -183,7 +183,13 @@ function tilesOnThreads(input: MaskThreadsInput, plans: MaskTilePlan[]): Promise
         }
         results[message.index] = message.result;
         done++;
-        input.onTile?.(done, plans.length);
+        try {
+          input.onTile?.(done, plans.length);
+        } catch (error) {
+          // a listener's failure would otherwise escape the event handler and leave the threads running
+          finish(() => reject(error));
+          return;
+        }
         if (done === plans.length) finish(() => resolve(results));
         else sendNext(worker);
       });
@@ -199,6 +205,12 @@ function tilesOnThreads(input: MaskThreadsInput, plans: MaskTilePlan[]): Promise
       });
       worker.on('exit', (code) => finish(() => reject(new Error(`a mask tile thread exited (code ${code}) before the mask was done`))));
       sendNext(worker);
+    };
+    try {
+      for (let t = 0; t < Math.min(input.threads, plans.length); t++) start();
+    } catch (error) {
+      // a thread that cannot start must not leave the others running
+      finish(() => reject(error));
     }
   });
 }

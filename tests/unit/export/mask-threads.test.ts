@@ -11,6 +11,7 @@ import { threadedTask } from '@/lib/jobs/threaded-task';
 import type { ExportInput, ExportOutcome } from '@/lib/jobs/export-job';
 import { compileScript } from '@/lib/lang';
 import { parsePhaseCsv, type PhaseMap } from '@/lib/phasemap';
+import { parseExportArgs } from '@/scripts/zw/export';
 
 // The reference for every comparison is buildMask: the same pure tile function run on the calling thread.
 const root = path.resolve(__dirname, '../../..');
@@ -115,6 +116,12 @@ quantize binary(duty: 0.5)
 });
 
 describe('the thread option', () => {
+  it('comes from zw export --threads as a whole number', () => {
+    expect(parseExportArgs(['a.zw', '--out', 'b.zip', '--threads', '3']).options.threads).toBe(3);
+    expect(parseExportArgs(['a.zw', '--out', 'b.zip']).options.threads).toBeUndefined();
+    expect(() => parseExportArgs(['a.zw', '--out', 'b.zip', '--threads', 'two'])).toThrow('--threads needs a whole number; got "two"');
+  });
+
   it.each([0, 1.5, 65])('refuses %s threads with the allowed range', async (threads) => {
     const result = exportDesign('wavelength 405 nm', { font, threads });
     await expect(result).rejects.toBeInstanceOf(ExportError);
