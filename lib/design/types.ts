@@ -37,6 +37,14 @@ export interface PhaseField {
    * so a bound that is too low can miss zones: it must never under-estimate.
    */
   maxSpatialFrequency(x0: number, y0: number, x1: number, y1: number): number;
+  /**
+   * Combinations only: an upper bound of Σ|w_k|·|∇φ_k|/(2π) over the box, so |∇u| ≤ 2π·this (per µm).
+   * For a combination `maxSpatialFrequency` bounds the parts, not arg u, whose gradient
+   * |∇arg u| ≤ |∇u|/|u| grows without bound near zeros of u; the geometry engine sets its sample step
+   * from this bound and |u| at each sample instead. Absent when |u| is constant (a single wave), where
+   * `maxSpatialFrequency` bounds |∇φ|/(2π) itself. Like it, it must never under-estimate.
+   */
+  maxFieldGradient?(x0: number, y0: number, x1: number, y1: number): number;
 }
 
 /**

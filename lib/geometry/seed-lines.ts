@@ -3,11 +3,11 @@ import { type Domain } from './domain';
 import { scanSegment } from './scan-segment';
 
 /**
- * Seed lines: horizontal and vertical lines at a fixed spacing, one pair through an anchor point
- * (the symmetry centre or a focus, where a lens phase has its extremum). For a single wave every
- * boundary crossing on them is found (at most one per sample interval, see scan-segment.ts); for a
- * combined field the frequency bound covers the parts, not arg u, so close crossings can merge into
- * one seed. A contour is traced from the first unvisited crossing and marks every crossing it passes.
+ * Seed lines: horizontal and vertical lines at a fixed spacing, offset from an anchor point (the
+ * symmetry centre or a focus, through which the tiles are cut). scan-segment.ts samples them so that
+ * each sample interval holds crossings of at most one boundary level, for single waves and
+ * combinations alike; a boundary grazing a line (crossing it twice within one interval) is not seen
+ * there. A contour is traced from the first unvisited crossing and marks every crossing it passes.
  */
 export interface SeedLine {
   /** y of a horizontal line, x of a vertical one */
@@ -98,10 +98,12 @@ export function buildSeedGrid(
 
 /**
  * The seed on `line` that a traced crossing at `position` passes through, or −1. It must be the
- * nearest seed and closer than half its sample step and half the gap to its neighbours, so a
- * crossing is never credited to a different boundary.
+ * nearest seed and closer than half the gap to its neighbours, so a crossing is never credited to a
+ * different boundary found on the line, and closer than half its sample step or `slack` (how far a
+ * traced chord may cross the line from the curve's crossing), whichever is larger: near a zero of a
+ * combined field the sample step can be shorter than the chord's error.
  */
-export function matchSeed(line: SeedLine, position: number): number {
+export function matchSeed(line: SeedLine, position: number, slack: number): number {
   const p = line.positions;
   let lo = 0;
   let hi = p.length;
@@ -115,7 +117,7 @@ export function matchSeed(line: SeedLine, position: number): number {
   if (below === Infinity && above === Infinity) return -1;
   const best = below <= above ? lo - 1 : lo;
   const distance = Math.min(below, above);
-  let limit = 0.5 * line.steps[best];
+  let limit = Math.max(0.5 * line.steps[best], slack);
   if (best > 0) limit = Math.min(limit, 0.5 * (p[best] - p[best - 1]));
   if (best < p.length - 1) limit = Math.min(limit, 0.5 * (p[best + 1] - p[best]));
   return distance < limit ? best : -1;

@@ -56,6 +56,8 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
   const turnRadius = 16 * minStep;
   const maxStep = Math.max(minStep * 16, Math.min(settings.seedSpacing, domain.box.x1 - domain.box.x0, domain.box.y1 - domain.box.y0));
   const seedTolerance = Math.min(1e-4, tol / 10);
+  /** a chord within `tol` of the curve crosses a seed line within a few `tol` of the curve's crossing unless nearly parallel to it */
+  const seedSlack = 4 * tol;
   const seeds: SeedGrid = buildSeedGrid(g, field, phaseGap, domain, settings.seedSpacing, settings.anchorX, settings.anchorY, seedTolerance);
   const grad = new Float64Array(2);
   /** numbers each trace, so a seed passed twice by one trace is told from one passed by another */
@@ -85,7 +87,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
         if (a < c === b < c) continue;
         const t = (c - a) / (b - a);
         const position = horizontal ? px + t * (qx - px) : py + t * (qy - py);
-        const s = matchSeed(line, position);
+        const s = matchSeed(line, position, seedSlack);
         if (s < 0) continue;
         if (start && start.horizontal === horizontal && start.line === k - first && start.seed === s) {
           if (vertices >= 3) return 'closed';
@@ -93,8 +95,9 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
         }
         if (line.visited[s] === traceNumber && line.passes[s] < MAX_PASSES) {
           // The same trace back at its own seed: a boundary grazing the seed line crosses it several
-          // times within one sample step (the scan found an odd number of them as one crossing), and
-          // all are credited to that seed. A trace circling a closed contour comes back more often.
+          // times within one sample interval (the scan guarantees one boundary level per interval,
+          // not one crossing, so an odd number of them shows as one), and all are credited to that
+          // seed. A trace circling a closed contour comes back more often.
           line.passes[s]++;
           continue;
         }
@@ -305,9 +308,10 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
   const n = domain.polygon.length / 2;
   /**
    * Along the domain's edge, exits and entries must alternate. Two exits in a row (or two entries)
-   * mean a boundary crossing slipped between two samples, which happens near zeros of a combined
-   * field where arg u outruns the parts' frequency bound: rescan that stretch 16 times finer and
-   * trace what it finds, until the edge is consistent.
+   * mean crossings slipped between two samples: the scan keeps crossings of different boundary
+   * levels apart, but a boundary grazing the edge can cross it three times within one interval and
+   * show one crossing (and, within the step floor of a zero of a combined field, levels may merge).
+   * Rescan that stretch 16 times finer and trace what it finds, until the edge is consistent.
    */
   const repairMissedCrossings = (found: Chain[]): void => {
     for (let round = 0; round < 64; round++) {

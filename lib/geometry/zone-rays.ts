@@ -1,8 +1,8 @@
-import type { CompiledDesign, Region } from '../design/types';
+import type { CompiledDesign, PhaseField, Region } from '../design/types';
 import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
 import type { MeasuredWidth } from './report-types';
 import { regionSignedDistance } from './region';
-import { scanSegment } from './scan-segment';
+import { scanSegment, type SampledField } from './scan-segment';
 
 export interface RayMeasurement {
   zoneCount: number;
@@ -44,6 +44,28 @@ function insideSpan(region: Region, x: number, y: number, dx: number, dy: number
 }
 
 /**
+ * The pieces seen as one field for the ray scan: each point takes its piece's field, and the bounds
+ * are the largest of the pieces'. When some piece is a combination, single-wave pieces give
+ * exp(iφ) (unit modulus, |∇| bounded by their frequency bound), so one |u|-scaled step rule holds
+ * for all. Piece cuts are discontinuities either way and are flagged where they are crossed.
+ */
+function piecewiseField(pieces: { field: PhaseField }[], pieceAt: (x: number, y: number) => { field: PhaseField } | undefined): SampledField {
+  const maxSpatialFrequency = (x0: number, y0: number, x1: number, y1: number) => Math.max(...pieces.map((p) => p.field.maxSpatialFrequency(x0, y0, x1, y1)));
+  if (pieces.every((p) => !p.field.maxFieldGradient)) return { field: (x, y, out) => (pieceAt(x, y) ?? pieces[0]).field.field(x, y, out), maxSpatialFrequency };
+  return {
+    field(x, y, out) {
+      const { field } = pieceAt(x, y) ?? pieces[0];
+      if (field.maxFieldGradient) return field.field(x, y, out);
+      const phase = field.phase(x, y);
+      out[0] = Math.cos(phase);
+      out[1] = Math.sin(phase);
+    },
+    maxSpatialFrequency,
+    maxFieldGradient: (x0, y0, x1, y1) => Math.max(...pieces.map((p) => p.field.maxFieldGradient?.(x0, y0, x1, y1) ?? p.field.maxSpatialFrequency(x0, y0, x1, y1))),
+  };
+}
+
+/**
  * Zone widths measured along rays from the design's centre. On each ray the drawn state is sampled at
  * the safe step of scan-segment.ts, every change is refined onto the boundary, and a ray length is
  * turned into a width across the zone with the boundary normals at both ends.
@@ -52,7 +74,7 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
   const spec = layerFunctionSpecs(design.quantization)[0];
   const pieces = design.pieces.map((p) => ({ region: p.region, field: p.field, g: boundaryFunction(p.field, spec).value }));
   const pieceAt = (x: number, y: number) => pieces.find((p) => !p.region || regionSignedDistance(p.region, x, y) > 0);
-  const bound = { maxSpatialFrequency: (x0: number, y0: number, x1: number, y1: number) => Math.max(...pieces.map((p) => p.field.maxSpatialFrequency(x0, y0, x1, y1))) };
+  const sampled = piecewiseField(pieces, pieceAt);
   const result: RayMeasurement = { zoneCount: 0, outermostZone: null, narrowestZone: null, smallestGap: null };
   const delta = 1e-4;
   for (let r = 0; r < RAY_COUNT; r++) {
@@ -67,7 +89,7 @@ export function measureZonesAlongRays(design: CompiledDesign, centre: { x: numbe
       return p ? p.g(x, y) : -1;
     };
     const startsDrawn = gOnPlane(centre.x + begin * dx, centre.y + begin * dy) > 0;
-    const found = scanSegment(gOnPlane, bound, spec.phaseGap, centre.x + begin * dx, centre.y + begin * dy, centre.x + end * dx, centre.y + end * dy, 1e-5);
+    const found = scanSegment(gOnPlane, sampled, spec.phaseGap, centre.x + begin * dx, centre.y + begin * dy, centre.x + end * dx, centre.y + end * dy, 1e-5);
     const crossings: Crossing[] = found.t.map((t) => {
       const sc = begin + t * (end - begin);
       const x = centre.x + sc * dx;

@@ -15,9 +15,11 @@ const TWO_PI = 2 * Math.PI;
  * The contract's PhaseField for a profile made of one or more waves.
  *
  * maxSpatialFrequency: for one wave it bounds |∇φ|/2π. For a combination it is the largest
- * bound of the parts: that bounds how fast the complex field u = Σ w_k·exp(iφ_k) (the
- * quantity the binary test and the optics sample) varies; arg u itself has no finite bound
- * near the zeros of u, where every zone edge meets.
+ * bound of the parts (what the optics' grid must resolve); arg u itself has no finite bound near
+ * the zeros of u, where every zone edge meets. A combination therefore also gives
+ * maxFieldGradient = Σ w_k·|∇φ_k|/2π, since ∇u = Σ i·w_k·∇φ_k·exp(i(φ_k + c_k)) gives
+ * |∇u| ≤ Σ w_k·|∇φ_k| (triangle inequality); with |u| at a point it bounds how fast arg u can turn
+ * nearby (scan-segment.ts).
  */
 export function phaseFieldOf(waves: Wave[]): PhaseField & { phaseRow(y: number, xs: Float64Array, out: Float64Array): void } {
   if (waves.length === 1) return singleWave(waves[0]);
@@ -74,6 +76,12 @@ export function phaseFieldOf(waves: Wave[]): PhaseField & { phaseRow(y: number, 
       let most = 0;
       for (const w of waves) if (w.weight > 0) most = Math.max(most, w.phase.bound(box).slope);
       return most / TWO_PI;
+    },
+    maxFieldGradient(x0, y0, x1, y1) {
+      const box = normaliseBox(x0, y0, x1, y1);
+      let sum = 0;
+      for (const w of waves) if (w.weight > 0) sum += w.weight * w.phase.bound(box).slope;
+      return sum / TWO_PI;
     },
   };
 }

@@ -67,9 +67,12 @@ export function combinedField(parts: { field: PhaseField; weight: number }[]): P
         im[i] = out2[1];
       }
     },
-    // |∇arg u| is not bounded by the parts' bounds near zeros of u; the tracer copes with singular points.
     maxSpatialFrequency(bx0, by0, bx1, by1) {
       return Math.max(...parts.map((p) => p.field.maxSpatialFrequency(bx0, by0, bx1, by1)));
+    },
+    // |∇u| ≤ Σ w_k·|∇φ_k| (triangle inequality); |∇arg u| has no bound near zeros of u
+    maxFieldGradient(bx0, by0, bx1, by1) {
+      return parts.reduce((s, p) => s + p.weight * p.field.maxSpatialFrequency(bx0, by0, bx1, by1), 0);
     },
   };
 }
