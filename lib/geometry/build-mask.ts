@@ -51,11 +51,11 @@ function toLayout(loops: Float64Array[]): LayoutPolygon[] {
 export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles: MaskTileResult[]): MaskResult {
   const infos = maskLayers(design, options);
   const phaseGap = layerFunctionSpecs(design.quantization).map((s) => s.phaseGap);
-  const drawn: DrawnLayer[] = infos.map((info, k) => ({
-    info,
-    polygons: tiles.flatMap((t) => t.layers[k]),
-    mayBeNarrow: narrowCandidates(design, options, phaseGap[k], new Set(tiles.flatMap((t) => t.clipped[k]))),
-  }));
+  const drawn: DrawnLayer[] = infos.map((info, k) => {
+    const polygons = tiles.flatMap((t) => t.layers[k]);
+    const candidates = narrowCandidates(design, options, phaseGap[k], polygons, new Set(tiles.flatMap((t) => t.clipped[k])));
+    return { info, polygons, mayBeNarrow: (p: Float64Array) => candidates.has(p) };
+  });
   const report = buildReport(design, options, drawn, designAnchor(design));
   const scale = 1e-6 / options.databaseUnit;
   const shapes = drawn.map((d) => ({ layer: d.info.layer, datatype: d.info.datatype, polygons: toLayout(d.polygons) }));

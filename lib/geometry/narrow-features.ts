@@ -19,13 +19,12 @@ function offset(paths: ClipperLib.Paths, delta: number, arcTolerance: number): C
 }
 
 /**
- * Parts of a polygon narrower than `width` (grid units), found by a morphological opening: shrink by
- * half the width, grow back, and keep what did not come back. Mitred joins give square corners back
- * whole; sharp tips still lose a little area, so only pieces larger than a quarter of the width
- * squared are reported.
+ * What a morphological opening by `width` (grid units) removes from polygons: shrink by half the
+ * width, grow back, and keep what did not come back. Mitred joins give corners of 60° or more back
+ * whole. Polygons further apart than twice the width do not affect each other.
  */
-export function narrowPlaces(polygon: Float64Array, width: number, arcTolerance: number): NarrowPlace[] {
-  const original = [toPath(polygon)];
+export function openingLoss(polygons: Float64Array[], width: number, arcTolerance: number): Float64Array[] {
+  const original = polygons.map(toPath);
   const half = width / 2;
   const opened = offset(offset(original, -half, arcTolerance), half, arcTolerance);
   const c = new ClipperLib.Clipper();
@@ -33,9 +32,16 @@ export function narrowPlaces(polygon: Float64Array, width: number, arcTolerance:
   c.AddPaths(opened, ClipperLib.PolyType.ptClip, true);
   const lost: ClipperLib.Paths = [];
   c.Execute(ClipperLib.ClipType.ctDifference, lost, ClipperLib.PolyFillType.pftNonZero, ClipperLib.PolyFillType.pftNonZero);
+  return lost.map(fromPath);
+}
+
+/**
+ * Parts of a polygon narrower than `width` (grid units), found by the opening. Sharp tips still lose
+ * a little area, so only pieces larger than a quarter of the width squared are reported.
+ */
+export function narrowPlaces(polygon: Float64Array, width: number, arcTolerance: number): NarrowPlace[] {
   const places: NarrowPlace[] = [];
-  for (const path of lost) {
-    const loop = fromPath(path);
+  for (const loop of openingLoss([polygon], width, arcTolerance)) {
     const area = signedArea(loop);
     if (area < 0.25 * width * width) continue;
     let cx = 0;

@@ -12,7 +12,12 @@ export function signedArea(loop: FlatLoop): number {
 export function perimeter(loop: FlatLoop): number {
   const n = loop.length / 2;
   let sum = 0;
-  for (let i = 0, j = n - 1; i < n; j = i++) sum += Math.hypot(loop[2 * i] - loop[2 * j], loop[2 * i + 1] - loop[2 * j + 1]);
+  // sqrt of the sum of squares: Math.hypot's overflow care costs several times more and grid coordinates cannot overflow
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const dx = loop[2 * i] - loop[2 * j];
+    const dy = loop[2 * i + 1] - loop[2 * j + 1];
+    sum += Math.sqrt(dx * dx + dy * dy);
+  }
   return sum;
 }
 
