@@ -49,7 +49,13 @@ const THREAD_ENTRY = path.join(__dirname, 'mask-tile-thread.ts');
  */
 const TILE_HEAP_MB = Math.min(2048, ownLimits.maxOldGenerationSizeMb || Infinity);
 
-const GEOMETRY_ERRORS: Record<string, new (message: string) => Error> = { GeometryError, MaskOptionsError, QuantizationError, RegionError };
+/** By the `name` each class gives its errors, which is what crosses the thread boundary. */
+const GEOMETRY_ERRORS = new Map<string, new (message: string) => Error>([
+  ['GeometryError', GeometryError],
+  ['MaskOptionsError', MaskOptionsError],
+  ['QuantizationError', QuantizationError],
+  ['RegionError', RegionError],
+]);
 
 /** The same mask as buildMask, with the traced tiles spread over `threads` worker threads. */
 export async function buildMaskOnThreads(input: MaskThreadsInput): Promise<MaskResult> {
@@ -143,7 +149,7 @@ function sharedPhaseMaps(maps: ReadonlyMap<string, PhaseMap>): Map<string, Phase
 
 /** The error a thread reported, as the class the single-thread path throws. */
 function threadError(name: string, message: string): Error {
-  const Known = GEOMETRY_ERRORS[name];
+  const Known = GEOMETRY_ERRORS.get(name);
   return Known ? new Known(message) : new Error(`a mask tile thread failed: ${message}`);
 }
 
