@@ -98,21 +98,6 @@ function sectorLayout(band: DrawnBand, tolerance: number, maxVertices: number): 
 }
 
 /**
- * Whether the field looks like one wave (|u| = 1) along the ray. The ray scan's one-crossing-per-step
- * guarantee is proven for single waves only; combinations (|u| varies, may vanish) go to the tracer,
- * which repairs crossings that slip between samples near zeros of u.
- */
-function unitModulusOnRay(design: CompiledDesign, innerRadius: number, outerRadius: number): boolean {
-  const centre = design.symmetryCentre!;
-  const out = new Float64Array(2);
-  for (let i = 0; i <= 64; i++) {
-    design.pieces[0].field.field(centre.x + innerRadius + ((outerRadius - innerRadius) * i) / 64, centre.y, out);
-    if (Math.abs(Math.hypot(out[0], out[1]) - 1) > 1e-9) return false;
-  }
-  return true;
-}
-
-/**
  * The exact path for a rotationally symmetric design (one profile symmetric about the centre of a
  * disc or ring aperture): every zone boundary is a circle, so its radius is found once along a ray
  * and the polygons are written straight from it, vertices on the circle and chords sagging at most
@@ -127,7 +112,6 @@ export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): M
   if (aperture.cx !== centre.x || aperture.cy !== centre.y) return null;
   const innerRadius = aperture.kind === 'ring' ? aperture.rInner : 0;
   const outerRadius = aperture.kind === 'ring' ? aperture.rOuter : aperture.r;
-  if (!unitModulusOnRay(design, innerRadius, outerRadius)) return null;
   const scale = 1e-6 / options.databaseUnit;
   const rootTolerance = Math.min(1e-6, options.chordTolerance * 1e-3);
   const layers: Float64Array[][] = [];

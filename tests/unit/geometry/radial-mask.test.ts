@@ -82,12 +82,30 @@ quantize multilevel(levels: 4, index: 1.5)
     expectWithinToleranceBand(traced, exact);
   });
 
-  it('leaves combined fields, whose zeros the ray scan cannot bound, to the tracer', () => {
+  it('finds the close pairs of edges beside the zero circles of two coaxial lenses of equal weight', () => {
     const field = combinedField([
       { field: lensField(0.405, 600), weight: 1 },
       { field: lensField(0.405, 900), weight: 1 },
     ]);
     const d = design(field, { kind: 'circle', cx: 0, cy: 0, r: 120 }, binary(0.5, 0), { symmetryCentre: { x: 0, y: 0 } });
-    expect(radialMaskTiles(d, resolveMaskOptions())).toBeNull();
+    const tiles = radialMaskTiles(d, resolveMaskOptions());
+    expect(tiles).not.toBeNull();
+    // reference: the sign changes of g = Re(u) (duty ½, φ0 = 0) along the ray at 0.1 nm steps
+    const out = new Float64Array(2);
+    const g = (r: number) => (field.field(r, 0, out), out[0]);
+    const reference: number[] = [];
+    for (let i = 1, prev = g(0); i <= 1_200_000; i++) {
+      const v = g(i * 1e-4);
+      if (v > 0 !== prev > 0) reference.push(i * 1e-4);
+      prev = v;
+    }
+    // every band edge of the exact path lies on the +x axis as a vertex at the edge's radius
+    const radii = new Set<number>();
+    for (const p of tiles![0].layers[0]) {
+      for (let i = 0; i < p.length; i += 2) if (p[i + 1] === 0 && p[i] > 0 && p[i] < 120_000) radii.add(p[i]);
+    }
+    const edges = [...radii].sort((a, b) => a - b);
+    expect(edges).toHaveLength(reference.length);
+    edges.forEach((e, i) => expect(Math.abs(e / 1000 - reference[i])).toBeLessThan(0.0012));
   });
 });
