@@ -63,14 +63,13 @@ export function matrixColumn(
       if (result.shapesBefore > 0 && result.polygons.length === 0) {
         throw new ExportError('options', `matrix column "${caption}": a bias of ${formatBias(bias)} µm erases every zone on layer ${key} (each zone narrows by ${fmt(-bias)} µm${narrowest}); use a smaller negative bias`);
       }
-      if (bias > 0 && result.shapesBefore > 1 && result.shapesAfter === 1) {
+      if (result.shapesBefore > 1 && result.shapesMerged === result.shapesBefore - 1) {
         throw new ExportError('options', `matrix column "${caption}": a bias of ${formatBias(bias)} µm merges all ${result.shapesBefore} zones on layer ${key} into one shape (each gap narrows by ${fmt(bias)} µm${smallestGap}); use a smaller bias`);
       }
       zonesLost += result.shapesLost;
       if (result.shapesLost > 0) warnings.push(`a bias of ${formatBias(bias)} µm erases ${result.shapesLost} of ${result.shapesBefore} zones on layer ${key}${narrowest}`);
-      const merged = bias > 0 ? result.shapesBefore - result.shapesAfter : 0;
-      zonesMerged += merged;
-      if (merged > 0) warnings.push(`a bias of ${formatBias(bias)} µm joins ${merged} of ${result.shapesBefore} zones on layer ${key} to a neighbour${smallestGap}`);
+      zonesMerged += result.shapesMerged;
+      if (result.shapesMerged > 0) warnings.push(`a bias of ${formatBias(bias)} µm joins ${result.shapesMerged} of ${result.shapesBefore} zones on layer ${key} to a neighbour${smallestGap}`);
       return { ...shape, polygons: result.polygons.map((p) => Int32Array.from(p)) };
     });
     library = { ...mask.library, cells: mask.library.cells.map((c) => (c === top ? { ...c, shapes } : c)) };

@@ -13,6 +13,8 @@ export interface SizeBiasResult {
   shapesAfter: number;
   /** shapes that a negative bias erased completely */
   shapesLost: number;
+  /** shapes that a positive bias joined to a neighbour (three zones grown into one count two) */
+  shapesMerged: number;
 }
 
 /**
@@ -72,31 +74,36 @@ function offset(paths: ClipperLib.Paths, delta: number): ClipperLib.Paths {
  * the gap between two zones g − bias.
  *
  * The pieces are first joined into whole shapes, so a shrink never opens cracks along fracture cuts.
- * Growing works on all shapes at once (shapes that touch merge); shrinking works shape by shape, which
- * gives the same result (a shrunk shape stays inside its own outline) and tells which shapes vanished.
- * The result is intersected with `clip` (the aperture, so a grown zone never leaves it) and fractured
- * again, hole-free, under `maxVertices`.
+ * Each shape is offset on its own: a shrunk shape stays inside its own outline, so this also tells
+ * which shapes vanished, and Clipper's sweep is far faster over one zone than over many concentric
+ * ones at once (measured: one offset of all zones of a two-focus plate took 20× longer). Only grown
+ * shapes need a second union, which merges those that overlap. Each resulting shape is intersected
+ * with `clip` (the aperture, so a grown zone never leaves it; strictly simple) and fractured again,
+ * hole-free, under `maxVertices`.
  */
 export function sizeBias(polygons: readonly ArrayLike<number>[], bias: number, clip: ClipperLib.Paths, maxVertices: number): SizeBiasResult {
   if (!Number.isFinite(bias)) throw new GeometryError(`The size bias must be a finite length, got ${bias}.`);
   const before = shapesOf(union(polygons.map(toPath)));
   const delta = bias / 2;
-  let moved: ClipperLib.Paths;
   let shapesLost = 0;
-  if (delta > 0) moved = offset(before.flat(), delta);
-  else if (delta < 0) {
-    moved = [];
-    for (const shape of before) {
-      const shrunk = offset(shape, delta);
-      if (shrunk.length === 0) shapesLost++;
-      moved.push(...shrunk);
-    }
-  } else moved = before.flat();
-  const after = shapesOf(intersection(moved, clip));
+  const moved = before.map((shape) => {
+    if (delta === 0) return shape;
+    const biased = offset(shape, delta);
+    if (biased.length === 0) shapesLost++;
+    return biased;
+  });
+  const joined = delta > 0 ? shapesOf(union(moved.flat())) : moved.filter((paths) => paths.length > 0);
+  const after = joined.flatMap((paths) => shapesOf(intersection(paths, clip)));
   const loops: Float64Array[] = [];
   for (const path of after.flat()) {
     const loop = cleanLoop(fromPath(path));
     if (loop && signedArea(loop) !== 0) loops.push(loop);
   }
-  return { polygons: fracture(loops, maxVertices), shapesBefore: before.length, shapesAfter: after.length, shapesLost };
+  return {
+    polygons: fracture(loops, maxVertices),
+    shapesBefore: before.length,
+    shapesAfter: after.length,
+    shapesLost,
+    shapesMerged: delta > 0 ? before.length - joined.length : 0,
+  };
 }

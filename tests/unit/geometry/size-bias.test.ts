@@ -60,7 +60,7 @@ describe('size bias', () => {
       const result = sizeBias(pieces, b, far, 4095);
       const expected = Math.PI * ((r2 + b / 2) ** 2 - (r1 - b / 2) ** 2);
       expect(Math.abs(total(result.polygons) - expected)).toBeLessThan(chordTolerance(r1, r2));
-      expect(result).toMatchObject({ shapesBefore: 1, shapesAfter: 1, shapesLost: 0 });
+      expect(result).toMatchObject({ shapesBefore: 1, shapesAfter: 1, shapesLost: 0, shapesMerged: 0 });
     }
   });
 
@@ -120,7 +120,7 @@ describe('size bias', () => {
   it('merges zones whose gap a positive bias closes', () => {
     // rings 10–11 µm and 11.1–12 µm (gap 0.1 µm); a bias of +0.2 µm joins them into the annulus 9.9–12.1 µm
     const result = sizeBias([...ringHalves(10_000, 11_000), ...ringHalves(11_100, 12_000)], 200, far, 4095);
-    expect(result).toMatchObject({ shapesBefore: 2, shapesAfter: 1, shapesLost: 0 });
+    expect(result).toMatchObject({ shapesBefore: 2, shapesAfter: 1, shapesLost: 0, shapesMerged: 1 });
     expect(Math.abs(total(result.polygons) - Math.PI * (12_100 ** 2 - 9_900 ** 2))).toBeLessThan(chordTolerance(12_100, 9_900));
   });
 
