@@ -50,12 +50,18 @@ function drawnBands(g: (x: number, y: number) => number, design: CompiledDesign,
  */
 function bandPolygons(cx: number, cy: number, band: DrawnBand, sectors: number, perSector: number, scale: number): Float64Array[] {
   const n = sectors * perSector;
-  // both arcs of a band share one table of directions
+  // Both arcs of a band share one table of directions; n is a multiple of 4, so one quadrant's
+  // directions give the others by exact quarter turns (which also makes the pieces exactly symmetric).
   const cos = new Float64Array(n + 1);
   const sin = new Float64Array(n + 1);
-  for (let i = 0; i <= n; i++) {
-    cos[i] = Math.cos((2 * Math.PI * i) / n);
-    sin[i] = Math.sin((2 * Math.PI * i) / n);
+  const quarter = n / 4;
+  for (let i = 0; i <= quarter; i++) {
+    const c = Math.cos((2 * Math.PI * i) / n);
+    const s = Math.sin((2 * Math.PI * i) / n);
+    for (let q = 0, cq = c, sq = s; q < 4; q++, [cq, sq] = [-sq, cq]) {
+      cos[i + q * quarter] = cq;
+      sin[i + q * quarter] = sq;
+    }
   }
   const point = (r: number, i: number, out: Float64Array, at: number) => {
     out[at] = cx + r * cos[i];
@@ -85,10 +91,10 @@ function bandPolygons(cx: number, cy: number, band: DrawnBand, sectors: number, 
   return loops.map((l) => snapLoop(l, scale)).filter((l): l is Float64Array => l !== null);
 }
 
-/** Sector count (1 for a whole disc, else a multiple of 4) and chords per sector arc keeping every piece within the vertex limit. */
+/** Sector count (1 for a whole disc, else a multiple of 4) and chords per sector arc (a multiple of 4 in all) keeping every piece within the vertex limit. */
 function sectorLayout(band: DrawnBand, tolerance: number, maxVertices: number): { sectors: number; perSector: number } {
   // the outer arc sets the chord count; the inner arc reuses it, so its chords sag even less
-  const chords = Math.max(16, chordCount(band.outer, tolerance));
+  const chords = 4 * Math.ceil(Math.max(16, chordCount(band.outer, tolerance)) / 4);
   if (band.inner === 0 && chords <= maxVertices) return { sectors: 1, perSector: chords };
   for (let sectors = 4; ; sectors += 4) {
     const perSector = Math.ceil(chords / sectors);
