@@ -64,11 +64,9 @@ export async function exportDesign(source: string, options: ExportOptions): Prom
     progress(0);
     const onTile = (tiles: number, total: number) => progress(tiles / total);
     built.push(await buildVariant({ source, phaseMaps: phaseMaps.used, design: variant, onTile }, settings, variants.length > 1 ? `${name.slice(0, 20)}_C${index + 1}` : name));
-    if (Date.now() - started > settings.timeBudgetMs) {
-      throw new ExportError('budget', `the geometry took longer than the time budget of ${(settings.timeBudgetMs / 1000).toFixed(0)} s; use a coarser chord tolerance or a smaller aperture`);
-    }
+    requireTimeBudget(started, settings);
   }
-  const columns = settings.matrix ? biasedColumns(built, design, settings) : null;
+  const columns = settings.matrix ? biasedColumns(built, design, settings, started) : null;
   const labelLayer = built[0].library.layers.find((l) => l.purpose === 'label') ?? settings.layers.labels;
   const labelled = (columns ?? built).map(({ library }) => addLabels(library, design.labels, font, labelLayer, settings.chordTolerance));
 
@@ -137,13 +135,21 @@ function variantDesigns(design: CompiledDesign, settings: ResolvedExportOptions)
 }
 
 /** Each matrix column's size bias applied and its figures measured (see matrix-columns.ts). */
-function biasedColumns(built: Array<{ library: LayoutLibrary; report: ManufacturabilityReport }>, design: CompiledDesign, settings: ResolvedExportOptions) {
+function biasedColumns(built: Array<{ library: LayoutLibrary; report: ManufacturabilityReport }>, design: CompiledDesign, settings: ResolvedExportOptions, started: number) {
   const captions = columnCaptions(settings);
   return built.map((mask, index) => {
     const column = settings.matrix!.columns[index];
     if (column.bias) settings.onProgress(0.7, `size bias, column ${index + 1} of ${built.length}`);
-    return matrixColumn(mask, column, captions[index], design, settings);
+    const biased = matrixColumn(mask, column, captions[index], design, settings);
+    requireTimeBudget(started, settings);
+    return biased;
   });
+}
+
+function requireTimeBudget(started: number, settings: ResolvedExportOptions): void {
+  if (Date.now() - started > settings.timeBudgetMs) {
+    throw new ExportError('budget', `the geometry took longer than the time budget of ${(settings.timeBudgetMs / 1000).toFixed(0)} s; use a coarser chord tolerance or a smaller aperture`);
+  }
 }
 
 /** One column's mask, its tiles on `settings.threads` threads. */
