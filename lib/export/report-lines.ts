@@ -12,7 +12,10 @@ export function reportLines(report: ManufacturabilityReport, library: LayoutLibr
     `open area: ${(report.openAreaFraction * 100).toFixed(2)} % of ${report.apertureArea_um2.toFixed(0)} µm²`,
     `mask geometry: ${report.polygonCount.toLocaleString('en')} polygons, ${report.vertexCount.toLocaleString('en')} vertices, largest ${report.largestPolygonVertices} points`,
     `in the files (labels and matrix included): ${storedVertices.toLocaleString('en')} vertices in ${library.cells.length} cell${library.cells.length === 1 ? '' : 's'}`,
-    `features under the ${report.minimumFeature_um} µm minimum: ${report.narrowFeatureCount}; slivers: ${report.sliverCount}`,
+    `features under the ${report.minimumFeature_um} µm minimum: ${report.narrowFeatureCount}`,
+    report.sliverWidth_um > 0
+      ? `slivers removed (narrower on average than ${report.sliverWidth_um} µm): ${report.sliverCount}, ${report.sliverArea_um2.toPrecision(3)} µm² in all`
+      : 'slivers: none removed (sliver width 0)',
   ];
   for (const warning of report.warnings.slice(0, 10)) lines.push(`warning: ${warning.message}`);
   if (report.warnings.length > 10) lines.push(`… and ${report.warnings.length - 10} more warnings in manifest.json`);

@@ -10,7 +10,7 @@ import { narrowCandidates } from './narrow-candidates';
 import { cleanLoop } from './polygon-math';
 import { radialMaskTiles } from './radial-mask';
 import { regionBox, validateRegion } from './region';
-import { buildReport, type DrawnLayer } from './report';
+import { buildReport, removeSlivers, type DrawnLayer } from './report';
 import type { ManufacturabilityReport } from './report-types';
 import { designAnchor, planMaskTiles } from './tiles';
 
@@ -51,10 +51,11 @@ function toLayout(loops: Float64Array[]): LayoutPolygon[] {
 export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles: MaskTileResult[]): MaskResult {
   const infos = maskLayers(design, options);
   const phaseGap = layerFunctionSpecs(design.quantization).map((s) => s.phaseGap);
+  const sliverWidth = (options.minSliverWidth * 1e-6) / options.databaseUnit;
   const drawn: DrawnLayer[] = infos.map((info, k) => {
-    const polygons = tiles.flatMap((t) => t.layers[k]);
+    const { kept: polygons, slivers } = removeSlivers(tiles.flatMap((t) => t.layers[k]), sliverWidth);
     const candidates = narrowCandidates(design, options, phaseGap[k], polygons, new Set(tiles.flatMap((t) => t.clipped[k])));
-    return { info, polygons, mayBeNarrow: (p: Float64Array) => candidates.has(p) };
+    return { info, polygons, slivers, mayBeNarrow: (p: Float64Array) => candidates.has(p) };
   });
   const report = buildReport(design, options, drawn, designAnchor(design));
   const scale = 1e-6 / options.databaseUnit;
@@ -65,7 +66,7 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
     const outline = regionPaths(design.aperture, scale, options.chordTolerance)
       .map((p) => cleanLoop(fromPath(p)))
       .filter((l): l is Float64Array => l !== null);
-    shapes.push({ layer: marker.layer, datatype: marker.datatype, polygons: toLayout(fracture(outline, options.maxVertices)) });
+    shapes.push({ layer: marker.layer, datatype: marker.datatype, polygons: toLayout(fracture(outline, options.maxVertices, sliverWidth)) });
     layers.push({ ...marker, name: 'aperture', purpose: 'aperture' });
   }
   return {

@@ -89,7 +89,7 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
     }
     if (plan.exact) {
       // Traced inside the clip region itself: loops that reach its edge are the ones it cuts.
-      const fractured = fracture(snapped, options.maxVertices);
+      const fractured = fracture(snapped, options.maxVertices, options.minSliverWidth * scale);
       layers.push(fractured);
       clipped.push(fractured.filter((l) => !insideRegion(region, l, gridUm)));
       continue;
@@ -99,9 +99,9 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
     let clippedLoops: Float64Array[] = [];
     if (toClip.some(Boolean)) {
       clipPaths ??= regionPaths(region, scale, options.chordTolerance);
-      clippedLoops = fracture(clipLoops(snapped.filter((_, i) => toClip[i]), clipPaths), options.maxVertices);
+      clippedLoops = fracture(clipLoops(snapped.filter((_, i) => toClip[i]), clipPaths), options.maxVertices, options.minSliverWidth * scale);
     }
-    layers.push(fracture(kept, options.maxVertices).concat(clippedLoops));
+    layers.push(fracture(kept, options.maxVertices, options.minSliverWidth * scale).concat(clippedLoops));
     clipped.push(clippedLoops);
   }
   return { piece: plan.piece, layers, clipped };

@@ -25,7 +25,7 @@ export interface MaskOptions {
   chordTolerance: number;
   /** most points per polygon (GDSII boundary), 199..8191 */
   maxVertices: number;
-  /** pieces made by fracturing that are narrower than this (µm) are reported as slivers */
+  /** pieces narrower on average (2·area/perimeter, µm) than this are removed as slivers and listed in the report; 0 keeps all */
   minSliverWidth: number;
   /** process minimum feature (µm); narrower features are reported as warnings */
   minimumFeature: number;

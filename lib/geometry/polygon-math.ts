@@ -21,6 +21,11 @@ export function perimeter(loop: FlatLoop): number {
   return sum;
 }
 
+/** 2·area/perimeter: the width of a long strip, half the diameter of a disk; the sliver measure. */
+export function averageWidth(loop: FlatLoop): number {
+  return (2 * Math.abs(signedArea(loop))) / perimeter(loop);
+}
+
 export interface Bounds {
   x0: number;
   y0: number;

@@ -37,6 +37,18 @@ export interface NarrowFeature {
   area_um2: number;
 }
 
+/** A piece left out of the mask because it was narrower than the sliver width. */
+export interface RemovedSliver {
+  layer: number;
+  datatype: number;
+  /** centroid, µm */
+  x_um: number;
+  y_um: number;
+  area_um2: number;
+  /** 2·area/perimeter, µm */
+  width_um: number;
+}
+
 export interface ReportWarning {
   kind: 'narrow-feature' | 'narrow-zone' | 'narrow-gap' | 'sliver';
   message: string;
@@ -72,7 +84,14 @@ export interface ManufacturabilityReport {
   narrowFeatureCount: number;
   /** the first narrow features found (at most 200) */
   narrowFeatures: NarrowFeature[];
+  /** pieces narrower on average (2·area/perimeter) than this were removed; 0 keeps every piece */
+  sliverWidth_um: number;
+  /** pieces removed as slivers, on all layers */
   sliverCount: number;
+  /** their total area */
+  sliverArea_um2: number;
+  /** the first removed slivers (at most 200) */
+  slivers: RemovedSliver[];
   warnings: ReportWarning[];
   /** filled by the bundle writer */
   files?: { name: string; bytes: number }[];

@@ -3,21 +3,52 @@ import type { LayerInfo } from '../layout/types';
 import { regionPaths, fromPath } from './clip-region';
 import { narrowPlaces } from './narrow-features';
 import type { MaskOptions } from './options';
-import { perimeter, signedArea } from './polygon-math';
+import { averageWidth, signedArea } from './polygon-math';
 import { regionBox } from './region';
-import type { ManufacturabilityReport, NarrowFeature, ReportWarning } from './report-types';
+import type { ManufacturabilityReport, NarrowFeature, RemovedSliver, ReportWarning } from './report-types';
 import { measureZonesAlongRays } from './zone-rays';
 
 const LISTED = 200;
 
 export interface DrawnLayer {
   info: LayerInfo;
+  /** the polygons written to the mask */
   polygons: Float64Array[];
+  /** pieces left out as slivers (see removeSlivers) */
+  slivers: Float64Array[];
   /** whether a polygon may hold a feature narrower than the minimum (the others are proven wide enough) */
   mayBeNarrow: (polygon: Float64Array) => boolean;
 }
 
 const fmt = (v: number) => (Math.abs(v) >= 100 ? v.toFixed(1) : v.toPrecision(3));
+
+/**
+ * Splits pieces into those kept and slivers: narrower on average (2·area/perimeter, grid units) than
+ * `width`. A width of 0 keeps everything. Zones that are merely narrow are far wider than any sensible
+ * sliver width, so they stay and the opening reports them.
+ */
+export function removeSlivers(polygons: Float64Array[], width: number): { kept: Float64Array[]; slivers: Float64Array[] } {
+  if (!(width > 0)) return { kept: polygons, slivers: [] };
+  const kept: Float64Array[] = [];
+  const slivers: Float64Array[] = [];
+  for (const p of polygons) (averageWidth(p) < width ? slivers : kept).push(p);
+  return { kept, slivers };
+}
+
+/** Area centroid of a loop (grid units). */
+function centroid(loop: Float64Array): { x: number; y: number } {
+  const n = loop.length / 2;
+  let a = 0;
+  let cx = 0;
+  let cy = 0;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const cross = loop[2 * j] * loop[2 * i + 1] - loop[2 * i] * loop[2 * j + 1];
+    a += cross;
+    cx += (loop[2 * j] + loop[2 * i]) * cross;
+    cy += (loop[2 * j + 1] + loop[2 * i + 1]) * cross;
+  }
+  return a === 0 ? { x: loop[0], y: loop[1] } : { x: cx / (3 * a), y: cy / (3 * a) };
+}
 
 export function buildReport(design: CompiledDesign, options: MaskOptions, layers: DrawnLayer[], centre: { x: number; y: number }): ManufacturabilityReport {
   const gridUm = options.databaseUnit / 1e-6;
@@ -29,20 +60,37 @@ export function buildReport(design: CompiledDesign, options: MaskOptions, layers
   const warnings: ReportWarning[] = [];
   const narrowFeatures: NarrowFeature[] = [];
   let narrowFeatureCount = 0;
+  const slivers: RemovedSliver[] = [];
   let sliverCount = 0;
-  let firstSliver: { x: number; y: number } | null = null;
-  const minSliver = options.minSliverWidth * scale;
+  let sliverArea = 0;
   const summaries = layers.map((layer) => {
     let vertices = 0;
     let area = 0;
     for (const p of layer.polygons) {
       vertices += p.length / 2;
-      const a = signedArea(p);
-      area += a;
-      if (minSliver > 0 && (2 * a) / perimeter(p) < minSliver) {
-        sliverCount++;
-        firstSliver ??= { x: p[0] * gridUm, y: p[1] * gridUm };
-      }
+      area += signedArea(p);
+    }
+    let layerSliverArea = 0;
+    let firstSliver: RemovedSliver | null = null;
+    for (const p of layer.slivers) {
+      const at = centroid(p);
+      const sliver = { layer: layer.info.layer, datatype: layer.info.datatype, x_um: at.x * gridUm, y_um: at.y * gridUm, area_um2: Math.abs(signedArea(p)) * gridUm * gridUm, width_um: averageWidth(p) * gridUm };
+      firstSliver ??= sliver;
+      layerSliverArea += sliver.area_um2;
+      if (slivers.length < LISTED) slivers.push(sliver);
+    }
+    sliverCount += layer.slivers.length;
+    sliverArea += layerSliverArea;
+    if (firstSliver) {
+      const n = layer.slivers.length;
+      warnings.push({
+        kind: 'sliver',
+        message:
+          `${n} sliver${n === 1 ? ' was' : 's were'} removed from layer ${layer.info.layer}/${layer.info.datatype} (${fmt(layerSliverArea)} µm² in all): ${n === 1 ? 'it is' : 'they are'} narrower on average than the sliver width of ${fmt(options.minSliverWidth)} µm, which pattern generators drop or distort. ` +
+          `Such pieces come from the geometry itself, e.g. where the aperture edge runs nearly along a zone boundary; set the sliver width to 0 to keep them. The first was near (${fmt(firstSliver.x_um)}, ${fmt(firstSliver.y_um)}) µm.`,
+        x_um: firstSliver.x_um,
+        y_um: firstSliver.y_um,
+      });
     }
     let layerNarrow = 0;
     let first: NarrowFeature | null = null;
@@ -93,15 +141,6 @@ export function buildReport(design: CompiledDesign, options: MaskOptions, layers
       y_um: rays.smallestGap.y_um,
     });
   }
-  if (sliverCount > 0 && firstSliver) {
-    const at: { x: number; y: number } = firstSliver;
-    warnings.push({
-      kind: 'sliver',
-      message: `${sliverCount} polygon${sliverCount === 1 ? ' is' : 's are'} narrower on average than ${fmt(options.minSliverWidth)} µm (the sliver width); pattern generators may drop or distort them. The first is near (${fmt(at.x)}, ${fmt(at.y)}) µm.`,
-      x_um: at.x,
-      y_um: at.y,
-    });
-  }
   const edge = regionPaths(design.aperture, scale, options.chordTolerance).flat();
   const numericalApertures = design.foci.map((f, i) => {
     let rho = 0;
@@ -131,7 +170,10 @@ export function buildReport(design: CompiledDesign, options: MaskOptions, layers
     layers: summaries,
     narrowFeatureCount,
     narrowFeatures,
+    sliverWidth_um: options.minSliverWidth,
     sliverCount,
+    sliverArea_um2: sliverArea,
+    slivers,
     warnings,
   };
 }
