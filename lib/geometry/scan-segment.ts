@@ -97,7 +97,7 @@ export function scanSegment(
   };
   // the step floor; never so small that t + step/length rounds back to t
   const floor = Math.max(tolerance, length * 1e-12);
-  let tPrev = 0;
+  // g at the last sample, carried from piece to piece
   let gPrev = at(0);
   // Pieces of the segment are sampled at their own bound. A piece whose first step says it needs many
   // samples is halved first, and one that runs out of samples on the way (|u| falling) halves what is
@@ -137,16 +137,15 @@ export function scanSegment(
       const next = Math.min(t1, t + h / length);
       const gt = at(next);
       if (gPrev > 0 !== gt > 0) {
-        const root = refineRoot(at, tPrev, gPrev, next, gt, tolerance / length);
+        const root = refineRoot(at, t, gPrev, next, gt, tolerance / length);
         // A zero that g only touches (a phase extremum sitting on a boundary level) is no boundary.
-        const interval = (next - tPrev) * length;
+        const interval = (next - t) * length;
         const eps = Math.min(1e-3, interval / 4) / length;
         if (at(root - eps) > 0 !== at(root + eps) > 0) {
           out.t.push(root);
           out.step.push(interval);
         }
       }
-      tPrev = next;
       gPrev = gt;
       t = next;
     }
