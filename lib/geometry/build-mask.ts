@@ -54,7 +54,8 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
   const sliverWidth = (options.minSliverWidth * 1e-6) / options.databaseUnit;
   const drawn: DrawnLayer[] = infos.map((info, k) => {
     const { kept: polygons, slivers } = removeSlivers(tiles.flatMap((t) => t.layers[k]), sliverWidth);
-    const candidates = narrowCandidates(design, options, phaseGap[k], polygons, new Set(tiles.flatMap((t) => t.clipped[k])));
+    const provenWide = new Set(tiles.flatMap((t) => t.provenWide[k]));
+    const candidates = narrowCandidates(design, options, phaseGap[k], polygons.filter((p) => !provenWide.has(p)), new Set(tiles.flatMap((t) => t.clipped[k])));
     return { info, polygons, slivers, mayBeNarrow: (p: Float64Array) => candidates.has(p) };
   });
   const report = buildReport(design, options, drawn, designAnchor(design));

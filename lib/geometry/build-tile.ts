@@ -15,6 +15,8 @@ export interface MaskTileResult {
   layers: Float64Array[][];
   /** polygons that were clipped by the aperture or a piece's region (candidates for narrow features) */
   clipped: Float64Array[][];
+  /** polygons whose width the tile measured exactly and found no narrower than the minimum feature (no opening needed) */
+  provenWide: Float64Array[][];
 }
 
 export function clipRegionOf(design: CompiledDesign, piece: number): Region {
@@ -104,5 +106,5 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
     layers.push(fracture(kept, options.maxVertices, options.minSliverWidth * scale).concat(clippedLoops));
     clipped.push(clippedLoops);
   }
-  return { piece: plan.piece, layers, clipped };
+  return { piece: plan.piece, layers, clipped, provenWide: layers.map(() => []) };
 }

@@ -120,20 +120,28 @@ export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): M
   const outerRadius = aperture.kind === 'ring' ? aperture.rOuter : aperture.r;
   const scale = 1e-6 / options.databaseUnit;
   const rootTolerance = Math.min(1e-6, options.chordTolerance * 1e-3);
+  // A band's pieces are at least its width less the sagitta and two grid steps wide, and their cuts
+  // meet the arcs at right angles; only pie slices (a disc over the vertex limit) have sharp tips.
+  const shortfall = options.chordTolerance + 2 * (options.databaseUnit / 1e-6);
   const layers: Float64Array[][] = [];
   const clipped: Float64Array[][] = [];
+  const provenWide: Float64Array[][] = [];
   for (const spec of layerFunctionSpecs(design.quantization)) {
     const g = boundaryFunction(design.pieces[0].field, spec).value;
     const drawn: Float64Array[] = [];
-    const onEdge: Float64Array[] = [];
+    const narrowOnEdge: Float64Array[] = [];
+    const wide: Float64Array[] = [];
     for (const band of drawnBands(g, design, spec.phaseGap, innerRadius, outerRadius, rootTolerance)) {
       const { sectors, perSector } = sectorLayout(band, options.chordTolerance, options.maxVertices);
       const polygons = bandPolygons(centre.x, centre.y, band, sectors, perSector, scale);
       drawn.push(...polygons);
-      if (band.onApertureEdge) onEdge.push(...polygons);
+      const pieSlices = band.inner === 0 && sectors > 1;
+      if (!pieSlices && (band.inner === 0 ? 2 * band.outer : band.outer - band.inner) - shortfall >= options.minimumFeature) wide.push(...polygons);
+      else if (band.onApertureEdge) narrowOnEdge.push(...polygons);
     }
     layers.push(drawn);
-    clipped.push(onEdge);
+    clipped.push(narrowOnEdge);
+    provenWide.push(wide);
   }
-  return [{ piece: 0, layers, clipped }];
+  return [{ piece: 0, layers, clipped, provenWide }];
 }
