@@ -3,7 +3,7 @@ import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
 import { regionPaths, clipLoops } from './clip-region';
 import { makeDomain } from './domain';
 import { fracture } from './fracture';
-import type { MaskOptions } from './options';
+import { seedSpacingFor, type MaskOptions } from './options';
 import { loopBounds, signedArea, snapLoop, type Bounds } from './polygon-math';
 import { regionSignedDistance } from './region';
 import type { MaskTilePlan } from './tiles';
@@ -75,14 +75,15 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
   let clipPaths: ReturnType<typeof regionPaths> | null = null;
   const layers: Float64Array[][] = [];
   const clipped: Float64Array[][] = [];
+  const seedSpacing = seedSpacingFor(options, piece.field);
   for (const spec of layerFunctionSpecs(design.quantization)) {
     const g = boundaryFunction(piece.field, spec).value;
     const traced = traceTile(g, piece.field, spec.phaseGap, domain, {
       chordTolerance: options.chordTolerance,
       grid: gridUm,
-      seedSpacing: options.seedSpacing,
-      anchorX: plan.anchorX + 0.5 * options.seedSpacing,
-      anchorY: plan.anchorY + 0.5 * options.seedSpacing,
+      seedSpacing,
+      anchorX: plan.anchorX + 0.5 * seedSpacing,
+      anchorY: plan.anchorY + 0.5 * seedSpacing,
     });
     const snapped: Float64Array[] = [];
     for (const loop of traced) {
