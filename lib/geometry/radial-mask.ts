@@ -5,8 +5,8 @@ import type { MaskOptions } from './options';
 import { snapLoop } from './polygon-math';
 import { scanSegment } from './scan-segment';
 
-/** One drawn annulus a ≤ r ≤ b about the centre; a = 0 is a disc. */
-interface DrawnBand {
+/** One drawn annulus inner ≤ r ≤ outer (µm) about the centre; inner = 0 is a disc. */
+export interface DrawnBand {
   inner: number;
   outer: number;
   /** the band ends on the aperture's edge (inner or outer) */
@@ -20,8 +20,9 @@ function chordCount(r: number, tolerance: number): number {
 
 /**
  * The drawn bands along one radius: every sign change of g between the aperture's inner and outer
- * radius is found by scan-segment.ts (its sampling guarantee holds on the ray) and refined onto the
- * zero of g, so each band edge is a radius of the true level set.
+ * radius is found by scan-segment.ts (its sampling guarantee holds on the ray, for a combination down
+ * to its floor beside zeros of u) and refined onto the zero of g, so each band edge is a radius of
+ * the true level set.
  */
 function drawnBands(g: (x: number, y: number) => number, design: CompiledDesign, phaseGap: number, innerRadius: number, outerRadius: number, tolerance: number): DrawnBand[] {
   const centre = design.symmetryCentre!;
@@ -104,13 +105,10 @@ function sectorLayout(band: DrawnBand, tolerance: number, maxVertices: number): 
 }
 
 /**
- * The exact path for a rotationally symmetric design (one profile symmetric about the centre of a
- * disc or ring aperture): every zone boundary is a circle, so its radius is found once along a ray
- * and the polygons are written straight from it, vertices on the circle and chords sagging at most
- * the chord tolerance. The cost is the vertex count, with no tracing and no clipping (the aperture
- * edge is itself one of the circles). Null for any other design, which goes to the tracer.
+ * The drawn bands of every mask layer (in mask order) of a rotationally symmetric design: one profile
+ * symmetric about the centre of a disc or ring aperture. Null for any other design.
  */
-export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): MaskTileResult[] | null {
+export function radialBands(design: CompiledDesign, rootTolerance: number): DrawnBand[][] | null {
   const centre = design.symmetryCentre;
   const aperture = design.aperture;
   if (!centre || design.pieces.length !== 1 || design.pieces[0].region !== null) return null;
@@ -118,20 +116,34 @@ export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): M
   if (aperture.cx !== centre.x || aperture.cy !== centre.y) return null;
   const innerRadius = aperture.kind === 'ring' ? aperture.rInner : 0;
   const outerRadius = aperture.kind === 'ring' ? aperture.rOuter : aperture.r;
+  return layerFunctionSpecs(design.quantization).map((spec) =>
+    drawnBands(boundaryFunction(design.pieces[0].field, spec).value, design, spec.phaseGap, innerRadius, outerRadius, rootTolerance),
+  );
+}
+
+/**
+ * The exact path for a rotationally symmetric design (radialBands): every zone boundary is a circle,
+ * so its radius is found once along a ray and the polygons are written straight from it, vertices on
+ * the circle and chords sagging at most the chord tolerance. The cost is the vertex count, with no
+ * tracing and no clipping (the aperture edge is itself one of the circles). Null for any other
+ * design, which goes to the tracer.
+ */
+export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): MaskTileResult[] | null {
+  const bandsPerLayer = radialBands(design, Math.min(1e-6, options.chordTolerance * 1e-3));
+  if (!bandsPerLayer) return null;
+  const centre = design.symmetryCentre!;
   const scale = 1e-6 / options.databaseUnit;
-  const rootTolerance = Math.min(1e-6, options.chordTolerance * 1e-3);
   // A band's pieces are at least its width less the sagitta and two grid steps wide, and their cuts
   // meet the arcs at right angles; only pie slices (a disc over the vertex limit) have sharp tips.
   const shortfall = options.chordTolerance + 2 * (options.databaseUnit / 1e-6);
   const layers: Float64Array[][] = [];
   const clipped: Float64Array[][] = [];
   const provenWide: Float64Array[][] = [];
-  for (const spec of layerFunctionSpecs(design.quantization)) {
-    const g = boundaryFunction(design.pieces[0].field, spec).value;
+  for (const bands of bandsPerLayer) {
     const drawn: Float64Array[] = [];
     const narrowOnEdge: Float64Array[] = [];
     const wide: Float64Array[] = [];
-    for (const band of drawnBands(g, design, spec.phaseGap, innerRadius, outerRadius, rootTolerance)) {
+    for (const band of bands) {
       const { sectors, perSector } = sectorLayout(band, options.chordTolerance, options.maxVertices);
       const polygons = bandPolygons(centre.x, centre.y, band, sectors, perSector, scale);
       drawn.push(...polygons);
