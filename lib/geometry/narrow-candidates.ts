@@ -1,5 +1,5 @@
 import type { CompiledDesign } from '../design/types';
-import { openingLoss } from './narrow-features';
+import { narrowReach, openingLoss } from './narrow-features';
 import type { MaskOptions } from './options';
 import { loopBounds, signedArea } from './polygon-math';
 
@@ -34,6 +34,8 @@ const MOST_CUTS = 16;
  *    window is opened instead. Every place the whole opening would report (area ≥ m²/4) lies in
  *    the cores, so the polygon is cleared when the pieces its windows lose in their cores add up to
  *    less than that.
+ * narrow-features.ts opens the union of the layer's pieces; the union's opening holds each piece's,
+ * so what a piece does not lose alone the union does not lose there either.
  * Step 2 needs F to bound |∇φ|/2π, which holds for single waves only: for a combination F bounds
  * the parts, not arg u (PhaseField.maxFieldGradient is set), so every polygon is opened. Not
  * covered, as with the bound this replaces: one phase level bending back within m of itself (a
@@ -43,7 +45,7 @@ export function narrowCandidates(design: CompiledDesign, options: MaskOptions, p
   const gridUm = options.databaseUnit / 1e-6;
   const width = options.minimumFeature / gridUm;
   // whole grid steps, so the windows of step 3 have integer corners
-  const reach = Math.ceil(width + 2 * (options.chordTolerance / gridUm + 1));
+  const reach = narrowReach(width, options.chordTolerance / gridUm);
   const wideEnough = (x0: number, y0: number, x1: number, y1: number): boolean => {
     const ux0 = (x0 - reach) * gridUm;
     const uy0 = (y0 - reach) * gridUm;

@@ -94,14 +94,11 @@ export function buildReport(design: CompiledDesign, options: MaskOptions, layers
     }
     let layerNarrow = 0;
     let first: NarrowFeature | null = null;
-    for (const p of layer.polygons) {
-      if (!layer.mayBeNarrow(p)) continue;
-      for (const place of narrowPlaces(p, options.minimumFeature * scale, options.chordTolerance * scale)) {
-        layerNarrow++;
-        const feature = { layer: layer.info.layer, datatype: layer.info.datatype, x_um: place.x * gridUm, y_um: place.y * gridUm, area_um2: place.area * gridUm * gridUm };
-        first ??= feature;
-        if (narrowFeatures.length < LISTED) narrowFeatures.push(feature);
-      }
+    for (const place of narrowPlaces(layer.polygons, layer.mayBeNarrow, options.minimumFeature * scale, options.chordTolerance * scale)) {
+      layerNarrow++;
+      const feature = { layer: layer.info.layer, datatype: layer.info.datatype, x_um: place.x * gridUm, y_um: place.y * gridUm, area_um2: place.area * gridUm * gridUm };
+      first ??= feature;
+      if (narrowFeatures.length < LISTED) narrowFeatures.push(feature);
     }
     narrowFeatureCount += layerNarrow;
     if (first) {
