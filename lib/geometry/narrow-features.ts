@@ -1,7 +1,10 @@
 import ClipperLib from 'clipper-lib';
 import { fromPath, toPath } from './clip-region';
 import { boxPath, LayerPieces } from './layer-pieces';
-import type { Bounds } from './polygon-math';
+import { loopBounds, signedArea, type Bounds } from './polygon-math';
+
+/** Losses of a piece under this times the width squared are left out (see narrowPlaces). */
+const CRUMB = 0.01;
 
 export interface NarrowPlace {
   /** centroid, grid units */
@@ -83,7 +86,9 @@ export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64
   const losses: { index: number; shapes: Shape[] }[] = [];
   polygons.forEach((p, index) => {
     if (!opened(p)) return;
-    const shapes = lossShapes([toPath(p)], width, arcTolerance);
+    // most losses are slivers one grid step thin along edges (offsets round to the grid) or tips;
+    // one under a hundredth of the width squared changes no place's area by more than that
+    const shapes = lossShapes([toPath(p)], width, arcTolerance).filter((s) => shapeArea(s) >= CRUMB * width * width);
     if (shapes.length > 0) losses.push({ index, shapes });
   });
   const shapes = losses.flatMap((l) => l.shapes);
@@ -106,8 +111,8 @@ export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64
       keep(placeOf([shape]));
       continue;
     }
-    for (const part of combineShapes(ClipperLib.ClipType.ctDifference, [shape.outer, ...shape.holes], met.map(boxPath))) {
-      const stubs = combine(ClipperLib.ClipType.ctIntersection, [part.outer, ...part.holes], met.map((c) => boxPath(grow(c, 4))));
+    for (const part of combineShapes(ClipperLib.ClipType.ctDifference, shape.loops.map(toPath), met.map(boxPath))) {
+      const stubs = combine(ClipperLib.ClipType.ctIntersection, part.loops.map(toPath), met.map((c) => boxPath(grow(c, 4))));
       if (stubs.length === 0) keep(placeOf([part]));
       else {
         far.push({ shape: part, stubs });
@@ -123,13 +128,13 @@ export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64
   // a place's parts: joined shapes and the far parts whose stubs they hold (less the stubs, held twice)
   const group = joined.map((_, k) => k);
   const root = (k: number): number => (group[k] === k ? k : (group[k] = root(group[k])));
-  const sum = joined.map((j) => moments([j.outer, ...j.holes]));
+  const sum = joined.map((j) => moments(j.loops));
   const members: Shape[][] = joined.map((j) => [j]);
   for (const f of far) {
     let first = -1;
     for (const stub of f.stubs) {
       if (!ClipperLib.Clipper.Orientation(stub)) continue;
-      const k = joined.findIndex((j) => inShape(j, stub[0]));
+      const k = joined.findIndex((j) => inShape(j, stub[0].X, stub[0].Y));
       if (k < 0) continue;
       if (first < 0) first = k;
       else if (root(k) !== root(first)) group[root(k)] = root(first);
@@ -138,8 +143,8 @@ export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64
       keep(placeOf([f.shape]));
       continue;
     }
-    const whole = moments([f.shape.outer, ...f.shape.holes]);
-    const held = moments(f.stubs);
+    const whole = moments(f.shape.loops);
+    const held = moments(f.stubs.map(fromPath));
     sum[first] = { a: sum[first].a + whole.a - held.a, mx: sum[first].mx + whole.mx - held.mx, my: sum[first].my + whole.my - held.my };
     members[first].push(f.shape);
   }
@@ -157,10 +162,9 @@ export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64
   return places;
 }
 
-/** A connected part of a set: outer loop (counter-clockwise), its holes and its box. */
+/** A connected part of a set: its outer loop (counter-clockwise), then its holes (flat, so many stay small), and its box. */
 interface Shape {
-  outer: ClipperLib.Path;
-  holes: ClipperLib.Path[];
+  loops: Float64Array[];
   box: Bounds;
 }
 
@@ -176,11 +180,25 @@ function combineShapes(type: ClipperLib.ClipType, subject: ClipperLib.Paths, cli
 
 const unite = (paths: ClipperLib.Paths) => combineShapes(ClipperLib.ClipType.ctUnion, paths, []);
 
-const shapeArea = (s: Shape) => ClipperLib.Clipper.Area(s.outer) + s.holes.reduce((a, h) => a + ClipperLib.Clipper.Area(h), 0);
+const shapeArea = (s: Shape) => s.loops.reduce((a, l) => a + signedArea(l), 0);
 
 /** Whether the point lies in the shape or on its outline. */
-const inShape = (s: Shape, p: ClipperLib.IntPoint) =>
-  p.X >= s.box.x0 && p.X <= s.box.x1 && p.Y >= s.box.y0 && p.Y <= s.box.y1 && ClipperLib.Clipper.PointInPolygon(p, s.outer) !== 0 && s.holes.every((h) => ClipperLib.Clipper.PointInPolygon(p, h) !== 1);
+const inShape = (s: Shape, x: number, y: number) =>
+  x >= s.box.x0 && x <= s.box.x1 && y >= s.box.y0 && y <= s.box.y1 && pointInLoop(s.loops[0], x, y) !== 0 && s.loops.slice(1).every((h) => pointInLoop(h, x, y) !== 1);
+
+/** 1 inside the loop, −1 on its outline, 0 outside (crossings of a ray towards +x; exact on the integer grid). */
+function pointInLoop(loop: Float64Array, x: number, y: number): number {
+  let inside = false;
+  for (let i = 0, j = loop.length - 2; i < loop.length; j = i, i += 2) {
+    const xi = loop[i];
+    const yi = loop[i + 1];
+    const xj = loop[j];
+    const yj = loop[j + 1];
+    if ((x - xj) * (yi - yj) === (y - yj) * (xi - xj) && x >= Math.min(xi, xj) && x <= Math.max(xi, xj) && y >= Math.min(yi, yj) && y <= Math.max(yi, yj)) return -1;
+    if (yi > y !== yj > y && x < xj + ((y - yj) * (xi - xj)) / (yi - yj)) inside = !inside;
+  }
+  return inside ? 1 : 0;
+}
 
 /**
  * Overlapping boxes joined where that covers no more than the two did (boxes along one cut line)
@@ -221,7 +239,10 @@ function shapesOf(tree: ClipperLib.PolyTree): Shape[] {
   const out: Shape[] = [];
   const visit = (node: ClipperLib.PolyNode) => {
     for (const child of node.Childs()) {
-      if (!child.IsHole()) out.push({ outer: child.Contour(), holes: child.Childs().map((h) => h.Contour()), box: pathBounds(child.Contour()) });
+      if (!child.IsHole()) {
+        const outer = fromPath(child.Contour());
+        out.push({ loops: [outer, ...child.Childs().map((h) => fromPath(h.Contour()))], box: loopBounds(outer) });
+      }
       visit(child);
     }
   };
@@ -232,7 +253,10 @@ function shapesOf(tree: ClipperLib.PolyTree): Shape[] {
 /** What the opening removes, as shapes; united into a tree only when there are holes (rare; the tree costs more). */
 function lossShapes(original: ClipperLib.Paths, width: number, arcTolerance: number): Shape[] {
   const lost = lossOfPaths(original, width, arcTolerance);
-  if (lost.every((loop) => ClipperLib.Clipper.Orientation(loop))) return lost.map((outer) => ({ outer, holes: [], box: pathBounds(outer) }));
+  if (lost.every((loop) => ClipperLib.Clipper.Orientation(loop))) return lost.map((path) => {
+    const outer = fromPath(path);
+    return { loops: [outer], box: loopBounds(outer) };
+  });
   const tree = new ClipperLib.PolyTree();
   const c = new ClipperLib.Clipper();
   c.AddPaths(lost, ClipperLib.PolyType.ptSubject, true);
@@ -305,43 +329,33 @@ interface Moments {
 }
 
 /** Area and first moments of loops (holes clockwise, so they subtract). */
-function moments(loops: ClipperLib.Paths): Moments {
+function moments(loops: Float64Array[]): Moments {
   let a = 0;
   let mx = 0;
   let my = 0;
   for (const loop of loops) {
-    for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) {
-      const cross = loop[j].X * loop[i].Y - loop[i].X * loop[j].Y;
+    for (let i = 0, j = loop.length - 2; i < loop.length; j = i, i += 2) {
+      const cross = loop[j] * loop[i + 1] - loop[i] * loop[j + 1];
       a += cross;
-      mx += (loop[j].X + loop[i].X) * cross;
-      my += (loop[j].Y + loop[i].Y) * cross;
+      mx += (loop[j] + loop[i]) * cross;
+      my += (loop[j + 1] + loop[i + 1]) * cross;
     }
   }
   return { a: a / 2, mx: mx / 6, my: my / 6 };
 }
 
 /** A place made of one shape. */
-const placeOf = (shapes: Shape[]): NarrowPlace => placeAt(moments(shapes.flatMap((s) => [s.outer, ...s.holes])), shapes);
+const placeOf = (shapes: Shape[]): NarrowPlace => placeAt(moments(shapes.flatMap((s) => s.loops)), shapes);
 
 /** A place of the given area at its centroid, or, when that lies outside its parts (a ring, a bend), at the vertex of its largest part nearest to it. */
 function placeAt(m: Moments, parts: Shape[]): NarrowPlace {
-  const at = { X: m.mx / m.a, Y: m.my / m.a };
-  if (parts.some((s) => inShape(s, at))) return { x: at.X, y: at.Y, area: m.a };
-  const largest = parts.reduce((a, b) => (shapeArea(b) > shapeArea(a) ? b : a));
-  let best = largest.outer[0];
-  for (const v of largest.outer) if (Math.hypot(v.X - at.X, v.Y - at.Y) < Math.hypot(best.X - at.X, best.Y - at.Y)) best = v;
-  return { x: best.X, y: best.Y, area: m.a };
-}
-
-function pathBounds(path: ClipperLib.Path): Bounds {
-  const b = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
-  for (const v of path) {
-    if (v.X < b.x0) b.x0 = v.X;
-    if (v.X > b.x1) b.x1 = v.X;
-    if (v.Y < b.y0) b.y0 = v.Y;
-    if (v.Y > b.y1) b.y1 = v.Y;
-  }
-  return b;
+  const x = m.mx / m.a;
+  const y = m.my / m.a;
+  if (parts.some((s) => inShape(s, x, y))) return { x, y, area: m.a };
+  const outer = parts.reduce((a, b) => (shapeArea(b) > shapeArea(a) ? b : a)).loops[0];
+  let best = 0;
+  for (let i = 2; i < outer.length; i += 2) if (Math.hypot(outer[i] - x, outer[i + 1] - y) < Math.hypot(outer[best] - x, outer[best + 1] - y)) best = i;
+  return { x: outer[best], y: outer[best + 1], area: m.a };
 }
 
 const cellKey = (cx: number, cy: number) => (cx + 2 ** 24) * 2 ** 26 + (cy + 2 ** 24);
