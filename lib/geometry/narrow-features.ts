@@ -7,7 +7,7 @@ import { loopBounds, signedArea, type Bounds } from './polygon-math';
 const CRUMB = 0.01;
 
 export interface NarrowPlace {
-  /** centroid, grid units */
+  /** a point of the place, grid units: its centroid, or the nearest vertex of its largest part when the centroid is off it */
   x: number;
   y: number;
   /** grid units² */
@@ -77,9 +77,10 @@ export function narrowReach(width: number, chordTolerance: number): number {
  *    united with the cores' parts; each loss joins the united shape holding its stubs, with its own
  *    area. Each place is then reported once, however many pieces and cores it runs through.
  * A shared edge that is not recognised (LayerPieces.sharesEdge) only leaves a piece's own loss there
- * (a wedge may stay), never hides a place. Not covered: a place lying wholly in pieces the candidate
- * test cleared, each losing less than a quarter of the width squared alone, whose parts together
- * would reach it.
+ * (a wedge may stay), never hides a place. A piece's losses under CRUMB·w² are dropped before
+ * all this, so a place's area may be short by that much per piece it runs through. Not covered: a
+ * place lying wholly in pieces the candidate test cleared, each losing less than a quarter of the
+ * width squared alone, whose parts together would reach it.
  */
 export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64Array) => boolean, width: number, arcTolerance: number): NarrowPlace[] {
   const reach = 2 * narrowReach(width, arcTolerance);
