@@ -36,10 +36,11 @@ function compileDesign(setup: TileThreadSetup): CompiledDesign {
   return { ...compiled.design, quantization: setup.quantization };
 }
 
-/** Every distinct buffer of a tile, once (a clipped loop is also in its layer). */
+/** Every distinct buffer of a tile, once (clipped and opened pieces are also in their layer). */
 function buffersOf(result: MaskTileResult): ArrayBuffer[] {
   const buffers = new Set<ArrayBuffer>();
-  for (const loops of [...result.layers, ...result.clipped]) for (const loop of loops) buffers.add(loop.buffer as ArrayBuffer);
+  for (const loops of result.layers) for (const loop of loops) buffers.add(loop.buffer as ArrayBuffer);
+  for (const losses of result.opened) for (const shapes of losses?.values() ?? []) for (const loops of shapes) for (const loop of loops) buffers.add(loop.buffer as ArrayBuffer);
   return [...buffers];
 }
 

@@ -55,8 +55,12 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
   const drawn: DrawnLayer[] = infos.map((info, k) => {
     const { kept: polygons, slivers } = removeSlivers(tiles.flatMap((t) => t.layers[k]), sliverWidth);
     const provenWide = new Set(tiles.flatMap((t) => t.provenWide[k]));
-    const candidates = narrowCandidates(design, options, phaseGap[k], polygons.filter((p) => !provenWide.has(p)), new Set(tiles.flatMap((t) => t.clipped[k])));
-    return { info, polygons, slivers, mayBeNarrow: (p: Float64Array) => candidates.has(p) };
+    // pieces of tiles that ran the test themselves are decided; the rest are tested here
+    const decided = new Set(tiles.flatMap((t) => (t.opened[k] ? t.layers[k] : [])));
+    const knownLosses = new Map(tiles.flatMap((t) => [...(t.opened[k] ?? [])]));
+    const undecided = polygons.filter((p) => !provenWide.has(p) && !decided.has(p));
+    const candidates = narrowCandidates(design, options, phaseGap[k], undecided, new Set(tiles.flatMap((t) => t.clipped[k])));
+    return { info, polygons, slivers, mayBeNarrow: (p: Float64Array) => candidates.has(p) || knownLosses.has(p), knownLosses };
   });
   const report = buildReport(design, options, drawn, designAnchor(design));
   const scale = 1e-6 / options.databaseUnit;

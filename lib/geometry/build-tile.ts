@@ -3,6 +3,8 @@ import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
 import { regionPaths, clipLoops } from './clip-region';
 import { makeDomain } from './domain';
 import { fracture } from './fracture';
+import { narrowCandidates } from './narrow-candidates';
+import { pieceLosses } from './narrow-features';
 import { seedSpacingFor, type MaskOptions } from './options';
 import { loopBounds, signedArea, snapLoop, type Bounds } from './polygon-math';
 import { regionSignedDistance } from './region';
@@ -17,6 +19,12 @@ export interface MaskTileResult {
   clipped: Float64Array[][];
   /** polygons whose width the tile measured exactly and found no narrower than the minimum feature (no opening needed) */
   provenWide: Float64Array[][];
+  /**
+   * Per layer, null when the tile left the narrow-feature test to the assembly; else the tile decided
+   * every piece: the candidates it opened, with what the opening takes from each (pieceLosses), and
+   * any piece not listed is cleared. Opening is the report's dearest step, so it runs on the tile's thread.
+   */
+  opened: (Map<Float64Array, Float64Array[][]> | null)[];
 }
 
 export function clipRegionOf(design: CompiledDesign, piece: number): Region {
@@ -75,6 +83,7 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
   let clipPaths: ReturnType<typeof regionPaths> | null = null;
   const layers: Float64Array[][] = [];
   const clipped: Float64Array[][] = [];
+  const opened: Map<Float64Array, Float64Array[][]>[] = [];
   const seedSpacing = seedSpacingFor(options, piece.field);
   for (const spec of layerFunctionSpecs(design.quantization)) {
     const g = boundaryFunction(piece.field, spec).value;
@@ -95,6 +104,7 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
       const fractured = fracture(snapped, options.maxVertices, options.minSliverWidth * scale);
       layers.push(fractured);
       clipped.push(fractured.filter((l) => !insideRegion(region, l, gridUm)));
+      opened.push(openCandidates(design, options, spec.phaseGap, fractured, clipped[clipped.length - 1]));
       continue;
     }
     const toClip = loopsToClip(snapped, (l) => !insideRegion(region, l, gridUm));
@@ -106,6 +116,15 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
     }
     layers.push(fracture(kept, options.maxVertices, options.minSliverWidth * scale).concat(clippedLoops));
     clipped.push(clippedLoops);
+    opened.push(openCandidates(design, options, spec.phaseGap, layers[layers.length - 1], clippedLoops));
   }
-  return { piece: plan.piece, layers, clipped, provenWide: layers.map(() => []) };
+  return { piece: plan.piece, layers, clipped, provenWide: layers.map(() => []), opened };
+}
+
+/** The pieces the narrow-feature test cannot clear, each opened alone (see MaskTileResult.opened). */
+function openCandidates(design: CompiledDesign, options: MaskOptions, phaseGap: number, pieces: Float64Array[], clipped: Float64Array[]): Map<Float64Array, Float64Array[][]> {
+  const scale = 1e-6 / options.databaseUnit;
+  const out = new Map<Float64Array, Float64Array[][]>();
+  for (const p of narrowCandidates(design, options, phaseGap, pieces, new Set(clipped))) out.set(p, pieceLosses(p, options.minimumFeature * scale, options.chordTolerance * scale));
+  return out;
 }

@@ -82,14 +82,19 @@ export function narrowReach(width: number, chordTolerance: number): number {
  * place lying wholly in pieces the candidate test cleared, each losing less than a quarter of the
  * width squared alone, whose parts together would reach it.
  */
-export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64Array) => boolean, width: number, arcTolerance: number): NarrowPlace[] {
+export function narrowPlaces(
+  polygons: Float64Array[],
+  opened: (polygon: Float64Array) => boolean,
+  width: number,
+  arcTolerance: number,
+  known: ReadonlyMap<Float64Array, Float64Array[][]> = new Map(),
+): NarrowPlace[] {
   const reach = 2 * narrowReach(width, arcTolerance);
   const losses: { index: number; shapes: Shape[] }[] = [];
   polygons.forEach((p, index) => {
     if (!opened(p)) return;
-    // most losses are slivers one grid step thin along edges (offsets round to the grid) or tips;
-    // one under a hundredth of the width squared changes no place's area by more than that
-    const shapes = lossShapes([toPath(p)], width, arcTolerance).filter((s) => shapeArea(s) >= CRUMB * width * width);
+    const done = known.get(p);
+    const shapes = done ? done.map((loops) => ({ loops, box: loopBounds(loops[0]) })) : pieceLossShapes(p, width, arcTolerance);
     if (shapes.length > 0) losses.push({ index, shapes });
   });
   const shapes = losses.flatMap((l) => l.shapes);
@@ -161,6 +166,20 @@ export function narrowPlaces(polygons: Float64Array[], opened: (polygon: Float64
   });
   for (const { m, shapes: parts } of byRoot.values()) keep(placeAt(m, parts));
   return places;
+}
+
+/**
+ * What the opening takes from one piece on its own, as connected parts (outer loop, then holes).
+ * Most losses are slivers one grid step thin along edges (offsets round to the grid) or tips; one
+ * under a hundredth of the width squared changes no place's area by more than that and is dropped.
+ */
+function pieceLossShapes(piece: Float64Array, width: number, arcTolerance: number): Shape[] {
+  return lossShapes([toPath(piece)], width, arcTolerance).filter((s) => shapeArea(s) >= CRUMB * width * width);
+}
+
+/** pieceLossShapes as plain loops, for tiles that open their own pieces (on their own thread) before narrowPlaces joins them. */
+export function pieceLosses(piece: Float64Array, width: number, arcTolerance: number): Float64Array[][] {
+  return pieceLossShapes(piece, width, arcTolerance).map((s) => s.loops);
 }
 
 /** A connected part of a set: its outer loop (counter-clockwise), then its holes (flat, so many stay small), and its box. */

@@ -155,5 +155,5 @@ export function radialMaskTiles(design: CompiledDesign, options: MaskOptions): M
     clipped.push(narrowOnEdge);
     provenWide.push(wide);
   }
-  return [{ piece: 0, layers, clipped, provenWide }];
+  return [{ piece: 0, layers, clipped, provenWide, opened: layers.map(() => null) }];
 }

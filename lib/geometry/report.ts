@@ -18,6 +18,8 @@ export interface DrawnLayer {
   slivers: Float64Array[];
   /** whether a polygon may hold a feature narrower than the minimum (the others are proven wide enough) */
   mayBeNarrow: (polygon: Float64Array) => boolean;
+  /** what the opening takes from pieces already opened alone by their tile (pieceLosses) */
+  knownLosses: ReadonlyMap<Float64Array, Float64Array[][]>;
 }
 
 const fmt = (v: number) => (Math.abs(v) >= 100 ? v.toFixed(1) : v.toPrecision(3));
@@ -94,7 +96,7 @@ export function buildReport(design: CompiledDesign, options: MaskOptions, layers
     }
     let layerNarrow = 0;
     let first: NarrowFeature | null = null;
-    for (const place of narrowPlaces(layer.polygons, layer.mayBeNarrow, options.minimumFeature * scale, options.chordTolerance * scale)) {
+    for (const place of narrowPlaces(layer.polygons, layer.mayBeNarrow, options.minimumFeature * scale, options.chordTolerance * scale, layer.knownLosses)) {
       layerNarrow++;
       const feature = { layer: layer.info.layer, datatype: layer.info.datatype, x_um: place.x * gridUm, y_um: place.y * gridUm, area_um2: place.area * gridUm * gridUm };
       first ??= feature;
