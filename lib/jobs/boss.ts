@@ -20,16 +20,16 @@ export const DEFAULT_EXPORT_QUEUES: ExportQueueNames = { work: EXPORT_QUEUE, dea
 
 export async function ensureExportQueues(boss: PgBoss, names: ExportQueueNames = DEFAULT_EXPORT_QUEUES): Promise<void> {
   // createQueue is idempotent; the dead-letter queue must exist before the queue that names it.
-  await boss.createQueue(names.dead);
-  await boss.createQueue(names.work, {
-    name: names.work,
-    deadLetter: names.dead,
-    retryLimit: EXPORT_RETRY_LIMIT,
-    retryDelay: 2,
-    expireInSeconds: EXPORT_EXPIRE_SECONDS,
-  });
+  // createQueue leaves an existing queue's settings alone, so they are written again for databases
+  // made by an older version.
+  const work = { name: names.work, deadLetter: names.dead, retryLimit: EXPORT_RETRY_LIMIT, retryDelay: 2, expireInSeconds: EXPORT_EXPIRE_SECONDS };
   // A lost focus check is only a missing cache entry: no retries, no dead letters.
-  await boss.createQueue(names.focus, { name: names.focus, retryLimit: 0, expireInSeconds: EXPORT_EXPIRE_SECONDS });
+  const focus = { name: names.focus, retryLimit: 0, expireInSeconds: EXPORT_EXPIRE_SECONDS };
+  await boss.createQueue(names.dead);
+  await boss.createQueue(names.work, work);
+  await boss.updateQueue(names.work, work);
+  await boss.createQueue(names.focus, focus);
+  await boss.updateQueue(names.focus, focus);
 }
 
 /** Starts pg-boss once per process. `worker: true` also runs its maintenance (expiry, dead letters). */

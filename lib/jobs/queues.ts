@@ -14,7 +14,7 @@ export interface ExportJobPayload {
 }
 
 /** A job stuck in the active state this long is failed by pg-boss and retried or dead-lettered. */
-export const EXPORT_EXPIRE_SECONDS = 300;
+export const EXPORT_EXPIRE_SECONDS = 660;
 /** One more attempt after a crash or time-out; failures inside the export are final (they would fail again). */
 export const EXPORT_RETRY_LIMIT = 1;
 

@@ -15,6 +15,7 @@ import { ensureExportQueues, getBoss, sendExportJob, stopBoss } from '@/lib/jobs
 import type { Exporter } from '@/lib/jobs/export-job';
 import { threadedTask } from '@/lib/jobs/threaded-task';
 import { DEAD_LETTER_MESSAGE, workExportQueues } from '@/lib/jobs/work-queues';
+import { EXPORT_EXPIRE_SECONDS } from '@/lib/jobs/queues';
 import { makeTeam, type TestTeam } from '../review/fixtures';
 
 let team: TestTeam;
@@ -88,5 +89,16 @@ describe('export queue', () => {
     expect(r.buildStatus).toBe('failed');
     expect(r.buildError).toBe(DEAD_LETTER_MESSAGE);
     expect(r.bundle).toBeNull();
+  });
+
+  it('writes the current expiry onto queues an older version created, keeping their dead-letter queue', async () => {
+    const boss = await getBoss(databaseUrl(), { worker: true });
+    const old = { work: `revision-export-old-${tag}`, dead: `revision-export-old-${tag}-dead`, focus: `revision-focus-old-${tag}` };
+    await boss.createQueue(old.dead);
+    await boss.createQueue(old.work, { name: old.work, deadLetter: old.dead, retryLimit: 1, expireInSeconds: 300 });
+    await boss.createQueue(old.focus, { name: old.focus, expireInSeconds: 300 });
+    await ensureExportQueues(boss, old);
+    for (const name of [old.work, old.focus]) expect((await boss.getQueue(name))?.expireInSeconds).toBe(EXPORT_EXPIRE_SECONDS);
+    expect((await boss.getQueue(old.work))?.deadLetter).toBe(old.dead);
   });
 });
