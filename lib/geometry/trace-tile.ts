@@ -38,6 +38,8 @@ const MAX_TURN = 0.3;
 /** Accepted change of |∇g| between two vertices; a faster change means a singular point ahead. */
 const GRADIENT_RATIO = 1.67;
 const TURN_SAMPLES = 96;
+/** A step's frequency bound this many times its ends' bounds means a singular point inside its box. */
+const SINGULAR_JUMP = 4;
 /** Passes of one trace through one seed before it counts as going round in circles. */
 const MAX_PASSES = 8;
 
@@ -208,6 +210,11 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
         sag = Math.max(corr / 4, (L * Math.abs(turn)) / 8);
         const along = (qx - px) * tx + (qy - py) * ty;
         ok = gqn > 0 && sag <= tol && Math.abs(turn) <= MAX_TURN && along > 0 && ratio < GRADIENT_RATIO && ratio > 1 / GRADIENT_RATIO;
+        // A step may jump across a singular point of the phase (a vortex centre) along a straight
+        // zero line, with |∇g| alike at both ends. The frequency bound over the step's box then
+        // dwarfs the bounds at its ends (for smooth phases they differ by a small factor), so the
+        // step shrinks until the turn below chooses the boundary on the drawn side.
+        ok &&= !(field.maxSpatialFrequency(Math.min(px, qx), Math.min(py, qy), Math.max(px, qx), Math.max(py, qy)) > SINGULAR_JUMP * Math.max(field.maxSpatialFrequency(px, py, px, py), field.maxSpatialFrequency(qx, qy, qx, qy)));
       }
       if (!ok) {
         L *= sag > tol && sag < Infinity && Math.abs(turn) <= MAX_TURN ? Math.min(0.5, Math.max(0.1, 0.9 * Math.sqrt(tol / sag))) : 0.5;
