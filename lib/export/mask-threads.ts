@@ -22,6 +22,7 @@ import {
   type MaskTilePlan,
   type MaskTileResult,
 } from '../geometry';
+import { loopBounds } from '../geometry/polygon-math';
 import type { PhaseMap } from '../phasemap/types';
 import { startTypeScriptWorker } from '../threads/typescript-worker';
 import { ExportError } from './errors';
@@ -81,16 +82,7 @@ export async function buildMaskOnThreads(input: MaskThreadsInput): Promise<MaskR
  */
 function estimatedWork(design: CompiledDesign, plan: MaskTilePlan, chordTolerance: number): number {
   const d = plan.domain;
-  let x0 = Infinity;
-  let y0 = Infinity;
-  let x1 = -Infinity;
-  let y1 = -Infinity;
-  for (let i = 0; i < d.length; i += 2) {
-    x0 = Math.min(x0, d[i]);
-    x1 = Math.max(x1, d[i]);
-    y0 = Math.min(y0, d[i + 1]);
-    y1 = Math.max(y1, d[i + 1]);
-  }
+  const { x0, y0, x1, y1 } = loopBounds(d);
   const field = design.pieces[plan.piece].field;
   const cells = 8;
   const w = (x1 - x0) / cells;

@@ -1,5 +1,6 @@
 import type { CompiledDesign, Region } from '../design/types';
 import { boxPolygon, exactConvexDomain, intersectConvex, regionDomain, type ConvexPolygon } from './convex-domain';
+import { loopBounds } from './polygon-math';
 import { regionBox } from './region';
 
 /** One independent unit of work: a piece of the design inside a convex part of its domain. */
@@ -40,16 +41,7 @@ export function planMaskTiles(design: CompiledDesign, chordTolerance: number): M
     const domain: ConvexPolygon =
       exactDomain ?? (piece.region ? intersectConvex(apertureDomain, regionDomain(piece.region)) : apertureDomain);
     if (domain.length < 6) return;
-    let x0 = Infinity;
-    let y0 = Infinity;
-    let x1 = -Infinity;
-    let y1 = -Infinity;
-    for (let i = 0; i < domain.length; i += 2) {
-      x0 = Math.min(x0, domain[i]);
-      x1 = Math.max(x1, domain[i]);
-      y0 = Math.min(y0, domain[i + 1]);
-      y1 = Math.max(y1, domain[i + 1]);
-    }
+    const { x0, y0, x1, y1 } = loopBounds(domain);
     // Only a lens centre makes a good cut; a design without one (a bare spiral phase, a grating)
     // may have a boundary running along the cut, so it stays in one tile.
     const centred = design.symmetryCentre !== null || design.foci.length > 0;
