@@ -1,3 +1,4 @@
+import { regionBox } from '../design/region-box';
 import type { Region } from '../design/types';
 
 /** Axis-aligned box in µm. */
@@ -12,53 +13,6 @@ export class RegionError extends Error {
   constructor(message: string) {
     super(message);
     this.name = 'RegionError';
-  }
-}
-
-export function regionBox(region: Region): Box {
-  switch (region.kind) {
-    case 'circle':
-      return { x0: region.cx - region.r, y0: region.cy - region.r, x1: region.cx + region.r, y1: region.cy + region.r };
-    case 'ring':
-      return { x0: region.cx - region.rOuter, y0: region.cy - region.rOuter, x1: region.cx + region.rOuter, y1: region.cy + region.rOuter };
-    case 'rectangle':
-      return {
-        x0: Math.min(region.x0, region.x1),
-        y0: Math.min(region.y0, region.y1),
-        x1: Math.max(region.x0, region.x1),
-        y1: Math.max(region.y0, region.y1),
-      };
-    case 'polygon': {
-      const p = region.points;
-      const box = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
-      for (let i = 0; i < p.length; i += 2) {
-        box.x0 = Math.min(box.x0, p[i]);
-        box.x1 = Math.max(box.x1, p[i]);
-        box.y0 = Math.min(box.y0, p[i + 1]);
-        box.y1 = Math.max(box.y1, p[i + 1]);
-      }
-      return box;
-    }
-    case 'union': {
-      const boxes = region.parts.map(regionBox);
-      return {
-        x0: Math.min(...boxes.map((b) => b.x0)),
-        y0: Math.min(...boxes.map((b) => b.y0)),
-        x1: Math.max(...boxes.map((b) => b.x1)),
-        y1: Math.max(...boxes.map((b) => b.y1)),
-      };
-    }
-    case 'intersection': {
-      const boxes = region.parts.map(regionBox);
-      return {
-        x0: Math.max(...boxes.map((b) => b.x0)),
-        y0: Math.max(...boxes.map((b) => b.y0)),
-        x1: Math.min(...boxes.map((b) => b.x1)),
-        y1: Math.min(...boxes.map((b) => b.y1)),
-      };
-    }
-    case 'difference':
-      return regionBox(region.parts[0]);
   }
 }
 

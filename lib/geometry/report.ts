@@ -4,7 +4,7 @@ import { regionPaths, fromPath } from './clip-region';
 import { narrowPlaces } from './narrow-features';
 import type { MaskOptions } from './options';
 import { averageWidth, signedArea } from './polygon-math';
-import { regionBox } from './region';
+import { regionBox } from '../design/region-box';
 import type { ManufacturabilityReport, NarrowFeature, RemovedSliver, ReportWarning } from './report-types';
 import { measureZonesAlongRays } from './zone-rays';
 

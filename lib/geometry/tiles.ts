@@ -1,7 +1,7 @@
 import type { CompiledDesign, Region } from '../design/types';
 import { boxPolygon, exactConvexDomain, intersectConvex, regionDomain, type ConvexPolygon } from './convex-domain';
 import { loopBounds } from './polygon-math';
-import { regionBox } from './region';
+import { regionBox } from '../design/region-box';
 
 /** One independent unit of work: a piece of the design inside a convex part of its domain. */
 export interface MaskTilePlan {
