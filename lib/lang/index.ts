@@ -18,7 +18,8 @@ export type { Builtin, BuiltinParam, DeclarationInfo } from './builtins';
 export { BUILTINS, DECLARATIONS, findBuiltin } from './builtins';
 export { UNITS } from './units';
 export { describeDesign } from './summary';
-export { regionContains, regionBox } from './eval/regions';
+export { regionBox } from '../design/region-box';
+export { regionContains } from '../design/region-contains';
 export { parse } from './parser';
 export { printProgram } from './printer';
 

@@ -6,7 +6,8 @@ import type { MaskModel } from './mask-model';
 import { readRadialMask } from './radial-mask';
 import { createRadialEngine } from './radial-engine';
 import { polygonCoverage, regionCoverage, stateCoverage } from './raster-coverage';
-import { polygonContains, regionContains, type Box } from './region';
+import { polygonContains, regionContains } from '../design/region-contains';
+import type { Box } from './region';
 import type { Illumination, SimulationOptions } from './types';
 
 export interface BuiltEngine {

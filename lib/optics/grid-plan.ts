@@ -1,7 +1,8 @@
 import type { CompiledDesign } from '../design/types';
 import type { MaskModel } from './mask-model';
 import type { Grid } from './raster-coverage';
-import { polygonsBounds, regionBounds, type Box } from './region';
+import { regionBox } from '../design/region-box';
+import { polygonsBounds, type Box } from './region';
 
 export interface GridPlan {
   grid: Grid;
@@ -20,7 +21,7 @@ export interface GridPlan {
  * maxGrid, only a central square of the mask is simulated and the plan says so.
  */
 export function planGrid(design: CompiledDesign, mask: MaskModel, maxGrid: number): GridPlan {
-  const aperture = mask.aperturePolygons ? polygonsBounds(mask.aperturePolygons) : regionBounds(mask.apertureRegion);
+  const aperture = mask.aperturePolygons ? polygonsBounds(mask.aperturePolygons) : regionBox(mask.apertureRegion);
   const fmax = (box: Box) => Math.max(...design.pieces.map((piece) => piece.field.maxSpatialFrequency(box.x0, box.y0, box.x1, box.y1)));
   const lambda = design.wavelength;
   const sideFor = (box: Box, pitch: number) => nextPowerOfTwo(Math.ceil((2 * Math.max(box.x1 - box.x0, box.y1 - box.y0)) / pitch));

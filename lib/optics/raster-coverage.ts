@@ -1,5 +1,5 @@
 import type { Region } from '../design/types';
-import { regionContains } from './region';
+import { regionContains } from '../design/region-contains';
 
 /** A square sampling grid: pixel (i, j) covers [x0 + i·pitch, x0 + (i+1)·pitch) × [y0 + j·pitch, …). */
 export interface Grid {

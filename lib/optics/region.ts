@@ -1,3 +1,4 @@
+import { regionContains } from '../design/region-contains';
 import type { Region } from '../design/types';
 
 export interface Box {
@@ -5,63 +6,6 @@ export interface Box {
   y0: number;
   x1: number;
   y1: number;
-}
-
-/** Whether (x, y) lies in the region (boundaries count as inside). */
-export function regionContains(region: Region, x: number, y: number): boolean {
-  switch (region.kind) {
-    case 'circle':
-      return (x - region.cx) ** 2 + (y - region.cy) ** 2 <= region.r ** 2;
-    case 'ring': {
-      const d2 = (x - region.cx) ** 2 + (y - region.cy) ** 2;
-      return d2 >= region.rInner ** 2 && d2 <= region.rOuter ** 2;
-    }
-    case 'rectangle':
-      return x >= Math.min(region.x0, region.x1) && x <= Math.max(region.x0, region.x1) && y >= Math.min(region.y0, region.y1) && y <= Math.max(region.y0, region.y1);
-    case 'polygon':
-      return polygonContains(region.points, x, y);
-    case 'union':
-      return region.parts.some((part) => regionContains(part, x, y));
-    case 'intersection':
-      return region.parts.every((part) => regionContains(part, x, y));
-    case 'difference':
-      return regionContains(region.parts[0], x, y) && !region.parts.slice(1).some((part) => regionContains(part, x, y));
-  }
-}
-
-/** Even-odd point-in-polygon test on flat x,y pairs. */
-export function polygonContains(points: ArrayLike<number>, x: number, y: number): boolean {
-  let inside = false;
-  const n = points.length;
-  for (let i = 0, j = n - 2; i < n; j = i, i += 2) {
-    const yi = points[i + 1];
-    const yj = points[j + 1];
-    if (yi > y !== yj > y) {
-      const xCross = points[i] + ((y - yi) * (points[j] - points[i])) / (yj - yi);
-      if (x < xCross) inside = !inside;
-    }
-  }
-  return inside;
-}
-
-/** Axis-aligned bounds of a region (of its first part for a difference, the overlap for an intersection). */
-export function regionBounds(region: Region): Box {
-  switch (region.kind) {
-    case 'circle':
-      return { x0: region.cx - region.r, y0: region.cy - region.r, x1: region.cx + region.r, y1: region.cy + region.r };
-    case 'ring':
-      return { x0: region.cx - region.rOuter, y0: region.cy - region.rOuter, x1: region.cx + region.rOuter, y1: region.cy + region.rOuter };
-    case 'rectangle':
-      return { x0: Math.min(region.x0, region.x1), y0: Math.min(region.y0, region.y1), x1: Math.max(region.x0, region.x1), y1: Math.max(region.y0, region.y1) };
-    case 'polygon':
-      return polygonsBounds([region.points]);
-    case 'union':
-      return region.parts.map(regionBounds).reduce(unionBox);
-    case 'intersection':
-      return region.parts.map(regionBounds).reduce((a, b) => ({ x0: Math.max(a.x0, b.x0), y0: Math.max(a.y0, b.y0), x1: Math.min(a.x1, b.x1), y1: Math.min(a.y1, b.y1) }));
-    case 'difference':
-      return regionBounds(region.parts[0]);
-  }
 }
 
 export function polygonsBounds(polygons: ArrayLike<number>[]): Box {
@@ -74,9 +18,6 @@ export function polygonsBounds(polygons: ArrayLike<number>[]): Box {
   return box;
 }
 
-function unionBox(a: Box, b: Box): Box {
-  return { x0: Math.min(a.x0, b.x0), y0: Math.min(a.y0, b.y0), x1: Math.max(a.x1, b.x1), y1: Math.max(a.y1, b.y1) };
-}
 
 /**
  * The radius intervals [a0, b0, a1, b1, …] the region covers along any ray from (cx, cy), when the
