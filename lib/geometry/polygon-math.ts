@@ -53,7 +53,9 @@ export function snapLoop(loop: FlatLoop, scale: number): Float64Array | null {
     xs[i] = Math.round(loop[2 * i] * scale);
     ys[i] = Math.round(loop[2 * i + 1] * scale);
   }
-  return cleanIntegerLoop(xs, ys, n);
+  const snapped = cleanIntegerLoop(xs, ys, n);
+  // a loop thinner than the grid can come out turned over (a drawn sliver as a hole): it cannot be drawn
+  return snapped && Math.sign(signedArea(snapped)) === Math.sign(signedArea(loop)) ? snapped : null;
 }
 
 /** Drops repeated and collinear points of an integer loop; null when fewer than three remain. */
