@@ -45,6 +45,11 @@ export interface PhaseField {
    * `maxSpatialFrequency` bounds |∇φ|/(2π) itself. Like it, it must never under-estimate.
    */
   maxFieldGradient?(x0: number, y0: number, x1: number, y1: number): number;
+  /**
+   * Combinations only: a lower bound of |u| everywhere, the largest weight less the sum of the others
+   * (reverse triangle inequality), or 0 when that is not positive. Above 0, u has no zeros at all.
+   */
+  minModulus?: number;
 }
 
 /**

@@ -32,6 +32,14 @@ export interface LayerFunctionSpec {
   sign: 1 | -1;
   phaseOffset: number;
   phaseGap: number;
+  /**
+   * Where u vanishes along a whole line (two parts of equal weight), arg u jumps by π across it, so
+   * the line is a boundary along some stretches and not along others, and its drawn side may swap.
+   * This is the smallest step of arg u (radians) between two such changes; arg u turns at most 2π·F
+   * per µm along the line (F the parts' frequency bound), so a step shorter than this over 2π·F
+   * passes at most one of them.
+   */
+  zeroLineGap: number;
 }
 
 export class QuantizationError extends Error {
@@ -53,13 +61,16 @@ export function layerFunctionSpecs(q: Quantization): LayerFunctionSpec[] {
         sign: q.tone === 'negative' ? -1 : 1,
         phaseOffset: q.phaseOffset,
         phaseGap: 2 * Math.PI * Math.min(q.duty, 1 - q.duty),
+        // the line's stretches change where arg v or arg v + π is ±π·duty: steps of 2π·d and π − 2π·d
+        // (d = min(duty, 1 − duty)); at duty ½ both levels change together, a crossing every π
+        zeroLineGap: q.duty === 0.5 ? Math.PI : 2 * Math.PI * Math.min(Math.min(q.duty, 1 - q.duty), Math.abs(0.5 - q.duty)),
       },
     ];
   }
   if (!Number.isInteger(q.bits) || q.bits < 1 || q.bits > 8) throw new QuantizationError(`A multi-level design needs 1 to 8 bits, got ${q.bits}.`);
   return Array.from({ length: q.bits }, (_, i) => {
     const power = 2 ** i;
-    return { power, rotation: (3 * Math.PI) / 2, threshold: 0, sign: 1 as const, phaseOffset: q.phaseOffset, phaseGap: Math.PI / power };
+    return { power, rotation: (3 * Math.PI) / 2, threshold: 0, sign: 1 as const, phaseOffset: q.phaseOffset, phaseGap: Math.PI / power, zeroLineGap: Math.PI / power };
   });
 }
 

@@ -1,4 +1,5 @@
 import type { PhaseField } from '../design/types';
+import type { LayerFunctionSpec } from './boundary-function';
 import { depthInDomain, exitAlong, perimeterPosition, type Domain } from './domain';
 import { GeometryError } from './errors';
 import { PointBuffer } from './point-buffer';
@@ -42,6 +43,8 @@ const TURN_SAMPLES = 96;
 const SINGULAR_JUMP = 4;
 /** Passes of one trace through one seed before it counts as going round in circles. */
 const MAX_PASSES = 8;
+/** Fraction of the spacing between changes along a zero line of u that one step may cover. */
+const ZERO_LINE_SAFETY = 0.45;
 
 /**
  * Follows every zone boundary (g = 0) inside a convex domain and returns the drawn regions as closed
@@ -50,7 +53,8 @@ const MAX_PASSES = 8;
  * is kept only when the chord stays within the chord tolerance of the curve (estimated from the
  * Newton correction and the tangent's turn), so the cost follows the number of vertices.
  */
-export function traceTile(g: (x: number, y: number) => number, field: PhaseField, phaseGap: number, domain: Domain, settings: TraceSettings): Loop[] {
+export function traceTile(g: (x: number, y: number) => number, field: PhaseField, levels: Pick<LayerFunctionSpec, 'phaseGap' | 'zeroLineGap'>, domain: Domain, settings: TraceSettings): Loop[] {
+  const { phaseGap } = levels;
   const tol = settings.chordTolerance;
   const converged = Math.min(1e-5, tol * 1e-2);
   const delta = Math.min(1e-4, settings.grid / 10);
@@ -69,6 +73,31 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     grad[0] = (g(x + delta, y) - gv) / delta;
     grad[1] = (g(x, y + delta) - gv) / delta;
   };
+
+  const fieldValue = new Float64Array(2);
+  // when the field's least |u| exceeds its slope bound over the tile times the chord tolerance, no zero is near any point
+  const zerosPossible = field.maxFieldGradient !== undefined && !((field.minModulus ?? 0) > 2 * Math.PI * field.maxFieldGradient(domain.box.x0, domain.box.y0, domain.box.x1, domain.box.y1) * Math.SQRT2 * tol);
+  /**
+   * Whether (x, y) may lie within the chord tolerance of a zero of a combined field: |u| is no more
+   * than its slope bound times that distance. Along a line where u (nearly) vanishes the line is a
+   * boundary only in stretches and its drawn side swaps at crossings; a step along it must not pass
+   * two such changes, which would look like a smooth continuation.
+   */
+  const nearZeroOfField = (x: number, y: number): boolean => {
+    if (!zerosPossible || !field.maxFieldGradient) return false;
+    field.field(x, y, fieldValue);
+    return Math.hypot(fieldValue[0], fieldValue[1]) <= 2 * Math.PI * field.maxFieldGradient(x - tol, y - tol, x + tol, y + tol) * Math.SQRT2 * tol;
+  };
+  /** The longest step from (x, y) along a zero line of u that passes at most one change of it (ZERO_LINE_SAFETY of the spacing). */
+  const zeroLineStep = (x: number, y: number, length: number): number => {
+    const frequency = field.maxSpatialFrequency(x - length, y - length, x + length, y + length);
+    const step = (ZERO_LINE_SAFETY * levels.zeroLineGap) / (2 * Math.PI * frequency);
+    // changes closer than a few grid steps are below the mask's resolution
+    return step > 4 * minStep ? step : 4 * minStep;
+  };
+  /** The drawn side lies left of the boundary's orientation (tx, ty) at (x, y), whichever way the trace runs: checked at distance `offset` across it. */
+  const drawnOnLeft = (x: number, y: number, tx: number, ty: number, offset: number): boolean =>
+    g(x - offset * ty, y + offset * tx) > 0 && g(x + offset * ty, y - offset * tx) < 0;
 
   /** Marks the seeds the chord p→q passes; reports closure at the start seed or a duplicate. */
   const visitChord = (px: number, py: number, qx: number, qy: number, start: SeedRef | null, vertices: number): 'ok' | 'closed' | 'duplicate' => {
@@ -125,11 +154,13 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
     let ty = (-dir * gx) / gn;
     out.push(px, py);
     let L = Math.min(maxStep, 1);
+    let nearZero = nearZeroOfField(px, py);
     let budget = depthInDomain(domain, px, py);
     let turns = 0;
     let rejected = 0;
     for (;;) {
       if (++rejected > 4000) throw new GeometryError(`A zone boundary could not be followed near (${px.toFixed(4)}, ${py.toFixed(4)}) µm.`);
+      if (nearZero) L = Math.min(L, zeroLineStep(px, py, L));
       // Is the domain edge within reach of this step?
       let exitEdge = -1;
       let hx = 0;
@@ -154,6 +185,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
       let gqx = 0;
       let gqy = 0;
       let gqn = 0;
+      let qNearZero = false;
       if (exitEdge < 0) {
         const predictedX = qx;
         const predictedY = qy;
@@ -215,6 +247,12 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
         // dwarfs the bounds at its ends (for smooth phases they differ by a small factor), so the
         // step shrinks until the turn below chooses the boundary on the drawn side.
         ok &&= !(field.maxSpatialFrequency(Math.min(px, qx), Math.min(py, qy), Math.max(px, qx), Math.max(py, qy)) > SINGULAR_JUMP * Math.max(field.maxSpatialFrequency(px, py, px, py), field.maxSpatialFrequency(qx, qy, qx, qy)));
+        if (ok) {
+          qNearZero = nearZeroOfField(qx, qy);
+          // Past the end of a boundary stretch of a zero line, g ≤ 0 on both sides of it and the
+          // tangent there means nothing: the drawn side must still be on the left.
+          if (nearZero || qNearZero) ok = drawnOnLeft(qx, qy, gqy / gqn, -gqx / gqn, Math.min(tol, 0.25 * L));
+        }
       }
       if (!ok) {
         L *= sag > tol && sag < Infinity && Math.abs(turn) <= MAX_TURN ? Math.min(0.5, Math.max(0.1, 0.9 * Math.sqrt(tol / sag))) : 0.5;
@@ -239,6 +277,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
           tx = (dir * gy) / gn;
           ty = (-dir * gx) / gn;
           L = turnRadius;
+          nearZero = nearZeroOfField(px, py);
         }
         continue;
       }
@@ -250,6 +289,7 @@ export function traceTile(g: (x: number, y: number) => number, field: PhaseField
       budget -= Math.sqrt((qx - px) ** 2 + (qy - py) ** 2);
       px = qx;
       py = qy;
+      nearZero = qNearZero;
       gx = gqx;
       gy = gqy;
       gn = gqn;

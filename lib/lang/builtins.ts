@@ -199,7 +199,8 @@ export const BUILTINS: readonly Builtin[] = [
     variadic: { name: 'parts', type: 'profile', min: 2, doc: 'phases or waves' },
     returns: 'complex field',
     formula: 'u = Σ w_k·exp(i(φ_k + c_k)); the fabricated phase is arg u',
-    description: 'Multi-focus profile: the complex sum of several parts, whose argument is fabricated.',
+    description:
+      'Multi-focus profile: the complex sum of several parts, whose argument is fabricated. Two parts of equal weight cancel along whole lines; the mask is drawn with the second weight 0.01 % lower so their zone edges are well defined (no edge moves by more than a fraction of a nanometre). Where weights are close but the quantization is not binary at duty 0.5, zone edges crowd together along those lines: keep the weights 10 % apart.',
     example: 'profile superpose(wave(lens(focal: 1 mm), weight: 2), lens(focal: 1.5 mm))',
   },
   {

@@ -1,5 +1,6 @@
 import type { DesignedFocus, PhaseField } from '../../design/types';
 import { normaliseBox } from './bounds';
+import { distinctWeights } from './distinct-weights';
 import type { ScalarField } from './scalar';
 
 /** One weighted part of a profile: w·exp(i(φ + c)). */
@@ -25,7 +26,9 @@ export function phaseFieldOf(waves: Wave[]): PhaseField & { phaseRow(y: number, 
   if (waves.length === 1) return singleWave(waves[0]);
   const n = waves.length;
   const ats = waves.map((w) => w.phase.at);
-  const weights = Float64Array.from(waves.map((w) => w.weight));
+  const weights = distinctWeights(waves.map((w) => w.weight));
+  const largest = Math.max(...weights);
+  const minModulus = Math.max(0, 2 * largest - weights.reduce((sum, w) => sum + w, 0));
   const offsets = Float64Array.from(waves.map((w) => w.offset));
   const sum = (x: number, y: number, out: Float64Array): void => {
     let re = 0;
@@ -77,6 +80,7 @@ export function phaseFieldOf(waves: Wave[]): PhaseField & { phaseRow(y: number, 
       for (const w of waves) if (w.weight > 0) most = Math.max(most, w.phase.bound(box).slope);
       return most / TWO_PI;
     },
+    minModulus,
     maxFieldGradient(x0, y0, x1, y1) {
       const box = normaliseBox(x0, y0, x1, y1);
       let sum = 0;
