@@ -2,6 +2,7 @@ import type { CompiledDesign, Region } from '../design/types';
 import { boundaryFunction, layerFunctionSpecs } from './boundary-function';
 import { regionPaths, clipLoops } from './clip-region';
 import { makeDomain } from './domain';
+import { GeometryError } from './errors';
 import { fracture } from './fracture';
 import { narrowCandidates } from './narrow-candidates';
 import { pieceLosses } from './narrow-features';
@@ -70,6 +71,25 @@ function loopsToClip(loops: Float64Array[], crossesOutside: (l: Float64Array) =>
 }
 
 /**
+ * Said after a tracing error in a combined field. Where waves of nearly equal weight meet out of
+ * phase, |u| nearly vanishes along lines and arg u swings by almost π across a band nanometres
+ * wide, so the zone edges of any level other than arg u = ±π/2 crowd together there (measured on
+ * two off-axis lenses: binary duty 0.3 and four levels failed at weights 0.5/0.48, worked at 0.5/0.45).
+ */
+const CANCELLING_WAVES_HINT =
+  'This profile combines waves: such a failure comes where they nearly cancel (weights close to each other), and zone edges crowd within nanometres there. Make the weights differ by 10 % or more, or quantize with binary(duty: 0.5), whose edges there are drawn.';
+
+/** traceTile, with the hint above added to its errors when the field is a combination. */
+function traceWithHint(...args: Parameters<typeof traceTile>): ReturnType<typeof traceTile> {
+  try {
+    return traceTile(...args);
+  } catch (error) {
+    if (error instanceof GeometryError && args[1].maxFieldGradient) throw new GeometryError(`${error.message} ${CANCELLING_WAVES_HINT}`);
+    throw error;
+  }
+}
+
+/**
  * A pure function of (design, options, plan), so tiles can run on separate workers: trace the zone
  * boundaries in the tile, snap to the grid, clip only the loops that reach outside the aperture (or
  * the piece's region), and fracture.
@@ -87,7 +107,7 @@ export function buildMaskTile(design: CompiledDesign, options: MaskOptions, plan
   const seedSpacing = seedSpacingFor(options, piece.field);
   for (const spec of layerFunctionSpecs(design.quantization)) {
     const g = boundaryFunction(piece.field, spec).value;
-    const traced = traceTile(g, piece.field, spec.phaseGap, domain, {
+    const traced = traceWithHint(g, piece.field, spec, domain, {
       chordTolerance: options.chordTolerance,
       grid: gridUm,
       seedSpacing,

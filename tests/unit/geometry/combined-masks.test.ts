@@ -2,7 +2,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { CompiledDesign } from '@/lib/design/types';
-import { buildMask } from '@/lib/geometry';
+import { buildMask, GeometryError } from '@/lib/geometry';
 import { compileScript } from '@/lib/lang';
 import { area, drawnTester, rng, selfIntersects, unionArea, zonePolygons } from './checks';
 
@@ -32,16 +32,16 @@ function expectClean(polygons: Int32Array[]) {
 /**
  * Points inside a circular aperture where the mask disagrees with the contract's binary test
  * Re(u·e^(−iφ0)) > cos(π·d)·|u| (lib/design/types.ts), skipping points within 2 % of a period of an edge.
+ * `field` is the design's own unless given.
  */
-function disagreements(design: CompiledDesign, polygons: Int32Array[], count: number, seed: number): number {
+function disagreements(design: CompiledDesign, polygons: Int32Array[], count: number, seed: number, field: (x: number, y: number, out: Float64Array) => void = design.pieces[0].field.field): number {
   const q = design.quantization;
   if (q.kind !== 'binary' || design.aperture.kind !== 'circle') throw new Error('binary designs on a disc only');
   const { cx, cy, r } = design.aperture;
-  const field = design.pieces[0].field;
   const out = new Float64Array(2);
   const sign = q.tone === 'negative' ? -1 : 1;
   const rule = (x: number, y: number) => {
-    field.field(x, y, out);
+    field(x, y, out);
     return sign * (out[0] * Math.cos(q.phaseOffset) + out[1] * Math.sin(q.phaseOffset) - Math.cos(Math.PI * q.duty) * Math.hypot(out[0], out[1]));
   };
   const drawn = drawnTester(polygons);
@@ -82,4 +82,50 @@ quantize binary(duty: 0.5)
 `);
     expectClean(zonePolygons(buildMask(design, { chordTolerance: 0.005 }).library));
   });
+
+  /** The two-focus example's lenses, both as `lens` so the test can write their phases down. */
+  const twoLenses = (weights: string, quantize: string) => `wavelength 405 nm
+aperture circle(diameter: 460 um)
+profile superpose(wave(lens(focal: 800 um, centre: (-40 um, 0 um)), weight: ${weights.split('/')[0]}), wave(lens(focal: 1.2 mm, centre: (60 um, 25 um)), weight: ${weights.split('/')[1]}))
+quantize ${quantize}
+`;
+
+  it('two off-axis lenses of equal weight, binary at duty ½: the field vanishes along lines, and the mask still matches the exact equal-weight sum', () => {
+    const design = compiled(twoLenses('1/1', 'binary(duty: 0.5)'));
+    const polygons = zonePolygons(buildMask(design, { chordTolerance: 0.005, seedSpacing: 10 }).library);
+    expectClean(polygons);
+    // u = e^(iφ1) + e^(iφ2) with the exact lens phase φ = −(2π/λ)(√(ρ² + f²) − f) (textbook optics,
+    // from memory), written here rather than taken from the compiled design, which draws the second
+    // weight 1e-4 lower (lib/lang/eval/distinct-weights.ts)
+    const k = (2 * Math.PI) / 0.405;
+    const phase = (x: number, y: number, x0: number, y0: number, f: number) => -k * (Math.sqrt((x - x0) ** 2 + (y - y0) ** 2 + f * f) - f);
+    const exactSum = (x: number, y: number, out: Float64Array) => {
+      const a = phase(x, y, -40, 0, 800);
+      const b = phase(x, y, 60, 25, 1200);
+      out[0] = Math.cos(a) + Math.cos(b);
+      out[1] = Math.sin(a) + Math.sin(b);
+    };
+    expect(disagreements(design, polygons, 4000, 23, exactSum)).toBe(0);
+  });
+
+  it('two lenses of weights 0.6/0.4 at duty 0.3 give clean polygons that match the contract (a loop thinner than the grid is dropped, not turned over)', () => {
+    const design = compiled(twoLenses('0.6/0.4', 'binary(duty: 0.3)'));
+    const polygons = zonePolygons(buildMask(design, { chordTolerance: 0.005, seedSpacing: 10 }).library);
+    expectClean(polygons);
+    expect(disagreements(design, polygons, 4000, 29)).toBe(0);
+  });
+
+  it('says what to change when nearly cancelling waves crowd the zone edges of another duty', () => {
+    const design = compiled(twoLenses('0.5/0.5', 'binary(duty: 0.3)'));
+    const failure = (() => {
+      try {
+        buildMask(design, { chordTolerance: 0.005 });
+      } catch (error) {
+        return error;
+      }
+    })();
+    expect(failure).toBeInstanceOf(GeometryError);
+    expect((failure as Error).message).toMatch(/Make the weights differ by 10 % or more, or quantize with binary\(duty: 0\.5\)/);
+  });
 });
+
