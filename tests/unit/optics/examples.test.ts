@@ -125,3 +125,24 @@ describe('examples/two-focus-offaxis.zw', () => {
     expect(Math.abs(ratio - p1 / p2) / (p1 / p2)).toBeLessThan(0.08);
   });
 });
+
+describe('examples/twin-spot-splitter.zw', () => {
+  it('puts two equal spots where the script does, each with (4/π²)² of the light', { timeout: 600_000 }, () => {
+    const design = compileExample('twin-spot-splitter.zw');
+    const { library } = buildMask(design, { ...defaultMaskOptions(), chordTolerance: 0.02 });
+    const result = simulateMask(design, library, { band: { from_um: 0.404, to_um: 0.406, samples: 2 } });
+    // Duty ½ of arg(e^(iφ1) + e^(iφ2)) is the π-phase mask t = sign(cos(Δ/2))·sign(cos(Σ/2)), Δ and Σ the
+    // difference and sum of the phases. A square wave's fundamental is (4/π)·cos (Fourier series,
+    // textbook), and cos(Δ/2)·cos(Σ/2) = (cos φ1 + cos φ2)/2, so e^(iφ1) comes with amplitude
+    // (4/π)²/4 = 4/π²: each focus gets (4/π²)² = 16/π⁴ ≈ 16.4 % of the light (derived here).
+    const expected = 16 / Math.PI ** 4;
+    expect(result.foci).toHaveLength(2);
+    design.foci.forEach((focus, k) => {
+      const [x, y, z] = result.foci[k].found_um;
+      expect(Math.hypot(x - focus.x, y - focus.y)).toBeLessThan(0.1);
+      expect(Math.abs(z - focus.z) / focus.z).toBeLessThan(0.002);
+      expect(Math.abs(result.foci[k].efficiency - expected) / expected).toBeLessThan(0.02);
+    });
+  });
+});
+
