@@ -1,4 +1,5 @@
 import type { ParameterRow } from '@/lib/workflow/parameter-diff';
+import { parameterLabel } from '@/lib/workflow/parameter-label';
 import { formatDelta, formatValue } from './format';
 
 const MARK: Record<ParameterRow['change'], { text: string; className: string }> = {
@@ -13,7 +14,9 @@ function Rows({ rows }: { rows: ParameterRow[] }) {
     <>
       {rows.map((row) => (
         <tr key={row.path} className="border-t border-hairline align-top" data-change={row.change}>
-          <td className="py-1 pr-4 font-mono text-xs">{row.path}</td>
+          <td className="py-1 pr-4 text-xs" title={row.path} data-testid="change-label">
+            {parameterLabel(row.path)}
+          </td>
           <td className={`py-1 pr-4 font-mono text-xs ${row.change === 'removed' || row.change === 'changed' ? 'text-removed' : ''}`}>{formatValue(row.before)}</td>
           <td className={`py-1 pr-4 font-mono text-xs ${row.change === 'added' || row.change === 'changed' ? 'text-added' : ''}`}>{formatValue(row.after)}</td>
           <td className="py-1 pr-4 font-mono text-xs">{formatDelta(row.delta)}</td>

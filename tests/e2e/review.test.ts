@@ -124,6 +124,10 @@ describe('review, release and fabrication in the browser', () => {
     expect(addedArea).toBeGreaterThan(1);
     expect(removedArea).toBeGreaterThan(1);
     await page.getByTestId('xor-overlay').waitFor();
+    // the parameter table names the moved focus in words, the raw path in its tooltip
+    const movedFocus = page.getByTestId('change-label').filter({ hasText: /^Focus 1 · z \(µm\)$/ });
+    await movedFocus.first().waitFor();
+    expect(await movedFocus.first().getAttribute('title')).toMatch(/foci\[0\]\.z$/);
 
     await page.goto(`/revisions/${ids.r2}`);
     await page.getByTestId('script-lines').getByRole('button', { name: '11', exact: true }).click();
