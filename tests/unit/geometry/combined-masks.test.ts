@@ -90,7 +90,7 @@ profile superpose(wave(lens(focal: 800 um, centre: (-40 um, 0 um)), weight: ${we
 quantize ${quantize}
 `;
 
-  it('two off-axis lenses of equal weight, binary at duty ½: the field vanishes along lines, and the mask still matches the exact equal-weight sum', () => {
+  it('two off-axis lenses of equal weight, binary at duty ½: the field vanishes along lines, and the mask still matches the exact equal-weight sum', { timeout: 300_000 }, () => {
     const design = compiled(twoLenses('1/1', 'binary(duty: 0.5)'));
     const polygons = zonePolygons(buildMask(design, { chordTolerance: 0.005, seedSpacing: 10 }).library);
     expectClean(polygons);
@@ -108,7 +108,7 @@ quantize ${quantize}
     expect(disagreements(design, polygons, 4000, 23, exactSum)).toBe(0);
   });
 
-  it('two lenses of weights 0.6/0.4 at duty 0.3 give clean polygons that match the contract (a loop thinner than the grid is dropped, not turned over)', () => {
+  it('two lenses of weights 0.6/0.4 at duty 0.3 give clean polygons that match the contract (a loop thinner than the grid is dropped, not turned over)', { timeout: 300_000 }, () => {
     const design = compiled(twoLenses('0.6/0.4', 'binary(duty: 0.3)'));
     const polygons = zonePolygons(buildMask(design, { chordTolerance: 0.005, seedSpacing: 10 }).library);
     expectClean(polygons);
