@@ -120,5 +120,11 @@ export interface CompiledDesign {
   foci: DesignedFocus[];
   /** Set when the profile and aperture are rotationally symmetric about this point (enables the radial optics). */
   symmetryCentre: { x: number; y: number } | null;
+  /**
+   * Set when the profile is one wave equal to a function of the distance from (x, y) plus
+   * charge·θ about it (a lens plus a vortex), inside a disc or ring about that point: every zone
+   * boundary is then a spiral (enables the geometry's spiral path). Absent means not known.
+   */
+  spiral?: { x: number; y: number; charge: number } | null;
   labels: LabelRequest[];
 }

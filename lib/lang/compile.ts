@@ -468,6 +468,7 @@ export function compileProgram(
       quantization: quantization.q,
       foci: fociOf(parts),
       symmetryCentre: symmetryCentre(aperture.region, parts),
+      spiral: spiralAbout(aperture.region, parts),
       labels,
     };
   });
@@ -475,6 +476,13 @@ export function compileProgram(
 }
 
 /** The centre when the aperture is a disc or ring and every part of the profile is symmetric about it. */
+/** The spiral of a single-wave profile whose aperture is a disc or ring about its centre. */
+function spiralAbout(aperture: Region, parts: Wave[]): CompiledDesign['spiral'] {
+  const spiral = parts.length === 1 ? parts[0].phase.spiral : undefined;
+  if (!spiral || (aperture.kind !== 'circle' && aperture.kind !== 'ring')) return null;
+  return aperture.cx === spiral.x && aperture.cy === spiral.y ? { ...spiral } : null;
+}
+
 function symmetryCentre(aperture: Region, parts: Wave[]): { x: number; y: number } | null {
   if (aperture.kind !== 'circle' && aperture.kind !== 'ring') return null;
   const centre = { kind: 'about' as const, x: aperture.cx, y: aperture.cy };

@@ -19,6 +19,8 @@ export interface ScalarField {
   focus: FocusInfo | null;
   /** set for a spiral phase: added to a lens centred here, it keeps the lens's focal point */
   neutralAbout?: { x: number; y: number };
+  /** set when the field is a function of the distance from (x, y) plus charge·θ about it */
+  spiral?: { x: number; y: number; charge: number };
 }
 
 /** A position-dependent condition (for `if`). */
@@ -69,7 +71,24 @@ export function angleField(cx: number, cy: number, core: number, charge = 1): Sc
     symmetry: NONE,
     focus: null,
     neutralAbout: { x: cx, y: cy },
+    spiral: { x: cx, y: cy, charge },
   };
+}
+
+const aboutSamePoint = (s: Symmetry, x: number, y: number): boolean =>
+  s.kind === 'any' || (s.kind === 'about' && Math.abs(s.x - x) < 1e-9 && Math.abs(s.y - y) < 1e-9);
+
+/** The spiral of a sum or difference: a spiral plus (or minus) a field symmetric about its centre, or two spirals about one centre. */
+function spiralOf(op: '+' | '-', a: ScalarField, b: ScalarField): ScalarField['spiral'] {
+  const sign = op === '+' ? 1 : -1;
+  if (a.spiral && b.spiral) {
+    const same = a.spiral.x === b.spiral.x && a.spiral.y === b.spiral.y;
+    const charge = a.spiral.charge + sign * b.spiral.charge;
+    return same && charge !== 0 ? { ...a.spiral, charge } : undefined;
+  }
+  if (a.spiral) return aboutSamePoint(b.symmetry, a.spiral.x, a.spiral.y) ? a.spiral : undefined;
+  if (b.spiral) return aboutSamePoint(a.symmetry, b.spiral.x, b.spiral.y) ? { ...b.spiral, charge: sign * b.spiral.charge } : undefined;
+  return undefined;
 }
 
 type Op2 = '+' | '-' | '*' | '/';
@@ -116,7 +135,8 @@ export function arithmeticField(op: Op2, left: ScalarField | number, right: Scal
     typeof other === 'number' || (other.neutralAbout !== undefined && lens.focus !== null && other.neutralAbout.x === lens.focus.x && other.neutralAbout.y === lens.focus.y);
   const additive = op === '+' || op === '-';
   const focus = additive && a.focus && keeps(a, right) ? a.focus : op === '+' && b.focus && keeps(b, left) ? b.focus : null;
-  return { at, bound, symmetry, focus };
+  const spiral = additive ? spiralOf(op, a, b) : undefined;
+  return spiral ? { at, bound, symmetry, focus, spiral } : { at, bound, symmetry, focus };
 }
 
 /** A function of one field: the value, the value range, and max |f′| over that range. */
