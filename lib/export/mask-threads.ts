@@ -14,7 +14,7 @@ import {
   MaskOptionsError,
   planMaskTiles,
   QuantizationError,
-  radialMaskTiles,
+  exactMaskTiles,
   RegionError,
   validateDesign,
   type MaskOptions,
@@ -62,8 +62,8 @@ const GEOMETRY_ERRORS = new Map<string, new (message: string) => Error>([
 export async function buildMaskOnThreads(input: MaskThreadsInput): Promise<MaskResult> {
   const { design, options } = input;
   validateDesign(design);
-  const radial = radialMaskTiles(design, options);
-  if (radial) return assembleMask(design, options, radial);
+  const exact = exactMaskTiles(design, options);
+  if (exact) return assembleMask(design, options, exact);
   const plans = planMaskTiles(design, options.chordTolerance);
   const tiles =
     input.threads <= 1 || plans.length <= 1

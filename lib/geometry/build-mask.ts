@@ -9,6 +9,7 @@ import { resolveMaskOptions, type MaskOptions } from './options';
 import { narrowCandidates } from './narrow-candidates';
 import { cleanLoop } from './polygon-math';
 import { radialMaskTiles } from './radial-mask';
+import { spiralMaskTiles } from './spiral-mask';
 import { regionBox } from '../design/region-box';
 import { validateRegion } from './region';
 import { buildReport, removeSlivers, type DrawnLayer } from './report';
@@ -88,6 +89,11 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
   };
 }
 
+/** The mask of a design whose boundaries are known in closed form (circles or spirals), else null: such designs skip the tracer. */
+export function exactMaskTiles(design: CompiledDesign, options: MaskOptions): MaskTileResult[] | null {
+  return radialMaskTiles(design, options) ?? spiralMaskTiles(design, options);
+}
+
 /**
  * From a compiled design to fractured integer polygons and the manufacturability report, on one
  * thread. `planMaskTiles` + `buildMaskTile` + `assembleMask` do the same work split into tiles for
@@ -96,6 +102,6 @@ export function assembleMask(design: CompiledDesign, options: MaskOptions, tiles
 export function buildMask(design: CompiledDesign, options: Partial<MaskOptions> = {}): MaskResult {
   const resolved = resolveMaskOptions(options);
   validateDesign(design);
-  const tiles = radialMaskTiles(design, resolved) ?? planMaskTiles(design, resolved.chordTolerance).map((plan) => buildMaskTile(design, resolved, plan));
+  const tiles = exactMaskTiles(design, resolved) ?? planMaskTiles(design, resolved.chordTolerance).map((plan) => buildMaskTile(design, resolved, plan));
   return assembleMask(design, resolved, tiles);
 }

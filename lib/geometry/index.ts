@@ -1,5 +1,5 @@
 /** Mask geometry: from a compiled design to clean, clipped, fractured polygons on the database grid. */
-export { buildMask, assembleMask, maskLayers, validateDesign, type MaskResult } from './build-mask';
+export { buildMask, assembleMask, exactMaskTiles, maskLayers, validateDesign, type MaskResult } from './build-mask';
 export { buildMaskTile, type MaskTileResult } from './build-tile';
 export { planMaskTiles, type MaskTilePlan } from './tiles';
 export { radialMaskTiles } from './radial-mask';

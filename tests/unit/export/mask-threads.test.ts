@@ -6,7 +6,7 @@ import { describe, expect, it } from 'vitest';
 import type { CompiledDesign } from '@/lib/design/types';
 import { exportDesign, ExportError } from '@/lib/export';
 import { buildMaskOnThreads } from '@/lib/export/mask-threads';
-import { buildMask, planMaskTiles, QuantizationError, radialMaskTiles, resolveMaskOptions, type MaskResult } from '@/lib/geometry';
+import { buildMask, exactMaskTiles, planMaskTiles, QuantizationError, resolveMaskOptions, type MaskResult } from '@/lib/geometry';
 import { threadedTask } from '@/lib/jobs/threaded-task';
 import type { ExportInput, ExportOutcome } from '@/lib/jobs/export-job';
 import { compileScript } from '@/lib/lang';
@@ -45,16 +45,16 @@ const options = resolveMaskOptions({});
 
 describe.each([
   ['two-focus-offaxis.zw', 2],
-  ['vortex-plate.zw', 2],
+  ['twin-spot-splitter.zw', 2],
   ['bifocal-multiplexed.zw', 3],
 ])('examples/%s on %i threads', (example, threads) => {
   const source = readFileSync(path.join(root, 'examples', example), 'utf8');
   const design = compiled(source);
 
   it('gives buildMask’s polygons, Int32 for Int32, and its report', async () => {
-    // several traced tiles, not the radial path, so the queue and the threads do the work
+    // several traced tiles, not an exact path, so the queue and the threads do the work
     expect(planMaskTiles(design, options.chordTolerance).length).toBeGreaterThan(threads);
-    expect(radialMaskTiles(design, options)).toBeNull();
+    expect(exactMaskTiles(design, options)).toBeNull();
     const finished: number[] = [];
     const threaded = await buildMaskOnThreads({ source, phaseMaps: new Map(), design, options, threads, onTile: (done) => finished.push(done) });
     const single = buildMask(design, options);
