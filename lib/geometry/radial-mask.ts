@@ -14,7 +14,7 @@ export interface DrawnBand {
 }
 
 /** Fewest chord segments on a full circle of radius r sagging at most `tolerance` (same rule as the aperture's inscribed polygon). */
-function chordCount(r: number, tolerance: number): number {
+export function chordCount(r: number, tolerance: number): number {
   return Math.ceil(Math.PI / Math.acos(Math.max(-1, 1 - tolerance / r)));
 }
 

@@ -4,6 +4,7 @@ import type { MaskTileResult } from './build-tile';
 import { fracture } from './fracture';
 import type { MaskOptions } from './options';
 import { snapLoop } from './polygon-math';
+import { chordCount } from './radial-mask';
 
 /** Largest change of the phase along the ray between two base samples, so unwrapping it is safe. */
 const RAY_PHASE_STEP = 1;
@@ -89,8 +90,8 @@ export function spiralMaskTiles(design: CompiledDesign, options: MaskOptions): M
 
   const scale = 1e-6 / options.databaseUnit;
   const { x: cx, y: cy, charge } = spiral;
-  const arcStep = 2 * Math.acos(Math.max(-1, 1 - tolerance / outer));
-  const innerArcStep = inner > 0 ? 2 * Math.acos(Math.max(-1, 1 - tolerance / inner)) : 0;
+  const arcStep = (2 * Math.PI) / chordCount(outer, tolerance);
+  const innerArcStep = inner > 0 ? (2 * Math.PI) / chordCount(inner, tolerance) : 0;
   const layers = layerFunctionSpecs(design.quantization).map((spec) => {
     const { from, to } = drawnInterval(spec);
     const m = spec.power;

@@ -42,13 +42,14 @@ function words(key: string): string {
 
 export function parameterLabel(path: string): string {
   const parts: string[] = [];
-  // keys and indices in order: "foci[1].z" → foci, [1], z
+  let owner = '';
+  // keys and indices in order: "foci[1].z" → foci, [1], z; an index names one item of the key before it
   for (const [, key, index] of path.matchAll(/([^.[\]]+)|\[(\d+)\]/g)) {
     if (index !== undefined) {
-      const owner = parts.pop() ?? '';
-      const item = Object.values(NAMES).find((n) => n.name === owner)?.item ?? owner;
-      parts.push(`${item} ${Number(index) + 1}`);
+      const whole = parts.pop() ?? '';
+      parts.push(`${NAMES[owner]?.item ?? whole} ${Number(index) + 1}`);
     } else {
+      owner = key;
       parts.push(NAMES[key]?.name ?? words(key));
     }
   }

@@ -32,10 +32,13 @@ export interface TestField {
 export const ANY: Symmetry = { kind: 'any' };
 export const NONE: Symmetry = { kind: 'none' };
 
+/** Two centres closer than 1e-9 µm are one (constants folded in different orders differ by rounding). */
+const samePoint = (a: { x: number; y: number }, b: { x: number; y: number }): boolean => Math.abs(a.x - b.x) < 1e-9 && Math.abs(a.y - b.y) < 1e-9;
+
 export function mergeSymmetry(a: Symmetry, b: Symmetry): Symmetry {
   if (a.kind === 'any') return b;
   if (b.kind === 'any') return a;
-  if (a.kind === 'about' && b.kind === 'about' && Math.abs(a.x - b.x) < 1e-9 && Math.abs(a.y - b.y) < 1e-9) return a;
+  if (a.kind === 'about' && b.kind === 'about' && samePoint(a, b)) return a;
   return NONE;
 }
 
@@ -75,19 +78,17 @@ export function angleField(cx: number, cy: number, core: number, charge = 1): Sc
   };
 }
 
-const aboutSamePoint = (s: Symmetry, x: number, y: number): boolean =>
-  s.kind === 'any' || (s.kind === 'about' && Math.abs(s.x - x) < 1e-9 && Math.abs(s.y - y) < 1e-9);
+const symmetricAbout = (s: Symmetry, centre: { x: number; y: number }): boolean => s.kind === 'any' || (s.kind === 'about' && samePoint(s, centre));
 
 /** The spiral of a sum or difference: a spiral plus (or minus) a field symmetric about its centre, or two spirals about one centre. */
 function spiralOf(op: '+' | '-', a: ScalarField, b: ScalarField): ScalarField['spiral'] {
   const sign = op === '+' ? 1 : -1;
   if (a.spiral && b.spiral) {
-    const same = a.spiral.x === b.spiral.x && a.spiral.y === b.spiral.y;
     const charge = a.spiral.charge + sign * b.spiral.charge;
-    return same && charge !== 0 ? { ...a.spiral, charge } : undefined;
+    return samePoint(a.spiral, b.spiral) && charge !== 0 ? { ...a.spiral, charge } : undefined;
   }
-  if (a.spiral) return aboutSamePoint(b.symmetry, a.spiral.x, a.spiral.y) ? a.spiral : undefined;
-  if (b.spiral) return aboutSamePoint(a.symmetry, b.spiral.x, b.spiral.y) ? { ...b.spiral, charge: sign * b.spiral.charge } : undefined;
+  if (a.spiral) return symmetricAbout(b.symmetry, a.spiral) ? a.spiral : undefined;
+  if (b.spiral) return symmetricAbout(a.symmetry, b.spiral) ? { ...b.spiral, charge: sign * b.spiral.charge } : undefined;
   return undefined;
 }
 
